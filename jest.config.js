@@ -1,0 +1,44 @@
+// Three projects: pure unit tests, API tests against real PostgreSQL, browser end-to-end tests.
+// `npm test` (server/scripts/test.ts) prepares PostgreSQL, the web bundle and Chromium first.
+const tsJest = [
+  'ts-jest',
+  {
+    tsconfig: {
+      module: 'commonjs',
+      moduleResolution: 'bundler',
+      target: 'es2022',
+      jsx: 'react-jsx',
+      esModuleInterop: true,
+      resolveJsonModule: true,
+      strict: true,
+      isolatedModules: true,
+      types: ['jest', 'node'],
+    },
+  },
+];
+const common = {
+  rootDir: __dirname,
+  testEnvironment: 'node',
+  transform: { '^.+\\.tsx?$': tsJest },
+  moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },
+};
+
+module.exports = {
+  projects: [
+    {
+      ...common,
+      displayName: 'unit',
+      testMatch: ['<rootDir>/tests/unit/**/*.test.ts', '<rootDir>/shared/**/*.test.ts'],
+    },
+    {
+      ...common,
+      displayName: 'api',
+      testMatch: ['<rootDir>/tests/api/**/*.test.ts'],
+    },
+    {
+      ...common,
+      displayName: 'e2e',
+      testMatch: ['<rootDir>/tests/e2e/**/*.test.ts'],
+    },
+  ],
+};

@@ -1,0 +1,68 @@
+// The Express application: API under /api/v1, then the exported web app with a fallback to its
+// HTML for client-side routes.
+import express, { type RequestHandler } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import pg from 'pg';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import type { AppContext } from './context';
+import { sessionMiddleware } from './auth/session';
+import { configurePassport } from './auth/passport';
+import { csrf } from './auth/csrf';
+import { createRateLimits } from './auth/rate-limits';
+import { apiNotFound, errorHandler } from './http/errors';
+import { currentUser } from './http/require-user';
+import { healthRoutes } from './routes/health';
+import { authRoutes } from './routes/auth';
+import { accountRoutes } from './routes/account';
+import { teamRoutes } from './routes/teams';
+import { invitationRoutes } from './routes/invitations';
+import { adminRoutes } from './routes/admin';
+import { devRoutes } from './routes/dev';
+
+export type App = { app: express.Express; close(): Promise<void> };
+
+const requireSignIn: RequestHandler = (req, _res, next) => {
+  currentUser(req);
+  next();
+};
+
+export function createApp(ctx: AppContext): App {
+  const { config, logger } = ctx;
+  const app = express();
+  const pool = new pg.Pool({ connectionString: config.databaseUrl, max: 5 });
+  const auth = configurePassport();
+  const limits = createRateLimits();
+
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(helmet({ contentSecurityPolicy: { directives: { 'script-src': ["'self'"], 'img-src': ["'self'", 'data:', 'blob:'] } } }));
+  app.use(pinoHttp({ logger, autoLogging: config.env !== 'test' }));
+
+  const api = express.Router();
+  api.use(express.json({ limit: '100kb' }));
+  api.use('/health', healthRoutes(ctx));
+  api.use(sessionMiddleware(config, pool));
+  api.use(auth.initialize());
+  api.use(auth.session());
+  api.use(csrf.csrfSynchronisedProtection);
+  api.use('/auth', authRoutes(ctx, auth, limits));
+  api.use('/invitations', invitationRoutes(ctx));
+  api.use('/account', requireSignIn, accountRoutes());
+  api.use('/teams', requireSignIn, teamRoutes(ctx));
+  api.use('/admin', requireSignIn, adminRoutes(ctx));
+  if (config.outboxEnabled) api.use('/dev', requireSignIn, devRoutes(ctx));
+  api.use(apiNotFound);
+  app.use('/api/v1', api);
+
+  const indexHtml = path.join(config.webDir, 'index.html');
+  if (existsSync(indexHtml)) {
+    app.use(express.static(config.webDir, { index: false, maxAge: '1h' }));
+    // Client-side routes (Expo Router) all load the same HTML.
+    app.use((req, res, next) => (req.method === 'GET' ? res.sendFile(indexHtml) : next()));
+  }
+  app.use(errorHandler(logger));
+
+  return { app, close: () => pool.end() };
+}

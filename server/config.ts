@@ -1,0 +1,42 @@
+// Runtime configuration from the environment, read once. Defaults suit `npm start` on one machine.
+import path from 'node:path';
+
+export const repoRoot = path.resolve(__dirname, '..');
+
+export type Config = {
+  env: 'development' | 'production' | 'test';
+  port: number;
+  databaseUrl: string;
+  sessionSecret: string;
+  appUrl: string;
+  smtpUrl: string;
+  mailFrom: string;
+  outboxDir: string;
+  webDir: string;
+  /** The development Outbox page and route; off in production. */
+  outboxEnabled: boolean;
+};
+
+function envName(value: string | undefined): Config['env'] {
+  return value === 'production' || value === 'test' ? value : 'development';
+}
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  const mode = envName(env.NODE_ENV);
+  const port = Number(env.PORT ?? 8080);
+  if (mode === 'production' && !env.SESSION_SECRET) {
+    throw new Error('SESSION_SECRET must be set in production (a long random string).');
+  }
+  return {
+    env: mode,
+    port,
+    databaseUrl: env.DATABASE_URL ?? 'postgres://patchcast@127.0.0.1:54329/patchcast',
+    sessionSecret: env.SESSION_SECRET ?? 'patchcast-development-secret-not-for-production',
+    appUrl: env.APP_URL ?? `http://localhost:${port}`,
+    smtpUrl: env.SMTP_URL ?? 'smtp://127.0.0.1:2525',
+    mailFrom: env.MAIL_FROM ?? 'Patchcast <no-reply@patchcast.local>',
+    outboxDir: env.OUTBOX_DIR ?? path.join(repoRoot, '.data', 'outbox'),
+    webDir: env.WEB_DIR ?? path.join(repoRoot, 'dist'),
+    outboxEnabled: mode !== 'production',
+  };
+}

@@ -1,0 +1,4 @@
+// The ordered list of migrations. Add new files here; never edit one that has shipped.
+import * as accounts from './0001-accounts';
+
+export const migrations = [{ name: '0001-accounts', ...accounts }];

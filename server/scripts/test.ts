@@ -1,0 +1,65 @@
+// `npm test`: the same preparation as `npm start`, against throwaway databases, then jest.
+// A template database is migrated once; each API or e2e test file clones it (CREATE DATABASE …
+// TEMPLATE …), so files are isolated and fast. Extra arguments go to jest.
+import { spawnSync } from 'node:child_process';
+import path from 'node:path';
+import pg from 'pg';
+import { repoRoot } from '../config';
+import { buildWebIfChanged } from './build-web';
+import { ensureLocalCluster } from './postgres';
+import { prepareDatabase } from './prepare-database';
+import { ensureDebianPackages } from './system';
+
+const TEMPLATE = 'patchcast_test_template';
+
+/** Debian packages the tests use as outside references or drivers (probe file for each). */
+const testPackages = {
+  chromium: '/usr/bin/chromium',
+};
+
+async function dropTestDatabases(adminUrl: string, includeTemplate: boolean): Promise<void> {
+  const client = new pg.Client({ connectionString: adminUrl });
+  await client.connect();
+  try {
+    const { rows } = await client.query<{ datname: string }>("SELECT datname FROM pg_database WHERE datname LIKE 'patchcast_test_%'");
+    for (const { datname } of rows) {
+      if (datname === TEMPLATE && !includeTemplate) continue;
+      await client.query(`DROP DATABASE IF EXISTS "${datname}" WITH (FORCE)`);
+    }
+  } finally {
+    await client.end();
+  }
+}
+
+async function main(): Promise<number> {
+  const cluster = process.env.DATABASE_URL ? null : ensureLocalCluster();
+  const serverUrl = new URL(process.env.DATABASE_URL ?? cluster!.adminUrl('postgres'));
+  const urlFor = (db: string): string => Object.assign(new URL(serverUrl), { pathname: `/${db}` }).toString();
+
+  await dropTestDatabases(urlFor('postgres'), true);
+  await prepareDatabase(urlFor(TEMPLATE), { seed: false });
+  ensureDebianPackages(testPackages, 'the test suite');
+  buildWebIfChanged();
+
+  const jest = spawnSync(process.execPath, [path.join(repoRoot, 'node_modules', 'jest', 'bin', 'jest.js'), '--runInBand', ...process.argv.slice(2)], {
+    cwd: repoRoot,
+    stdio: 'inherit',
+    env: {
+      ...process.env,
+      NODE_ENV: 'test',
+      PATCHCAST_TEST_SERVER_URL: urlFor('postgres'),
+      PATCHCAST_TEST_TEMPLATE: TEMPLATE,
+    },
+  });
+
+  await dropTestDatabases(urlFor('postgres'), true);
+  cluster?.stop();
+  return jest.status ?? 1;
+}
+
+main()
+  .then((code) => process.exit(code))
+  .catch((err: unknown) => {
+    console.error(err instanceof Error ? err.message : err);
+    process.exit(1);
+  });

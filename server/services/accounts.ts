@@ -1,0 +1,128 @@
+// Accounts: sign-up with e-mail verification, password check for sign-in, reset by e-mailed link,
+// and account settings.
+import bcrypt from 'bcryptjs';
+import { Op, type Transaction } from 'sequelize';
+import { AccountToken, Invitation, User } from '../models';
+import type { AppContext } from '../context';
+import { AppError } from '../http/errors';
+import { HOUR_MS, hashToken, newLinkToken } from './tokens';
+import { resetMail, verificationMail } from '../mail/templates';
+import type { TokenPurpose } from '../models/account-token';
+import type { ChangePasswordBody, ResetBody, SignUpBody, UpdateAccountBody } from '../../shared/schemas';
+
+const BCRYPT_ROUNDS = 10;
+const VERIFY_TTL_MS = 48 * HOUR_MS;
+const RESET_TTL_MS = 1 * HOUR_MS;
+
+export const hashPassword = (password: string): Promise<string> => bcrypt.hash(password, BCRYPT_ROUNDS);
+
+async function issueToken(userId: number, purpose: TokenPurpose, ttlMs: number): Promise<string> {
+  const { token, tokenHash } = newLinkToken();
+  await AccountToken.create({ userId, purpose, tokenHash, expiresAt: new Date(Date.now() + ttlMs) });
+  return token;
+}
+
+/** Marks a token used exactly once (a second use, or an expired token, is refused). */
+async function consumeToken(token: string, purpose: TokenPurpose, transaction?: Transaction): Promise<number> {
+  const [count, rows] = await AccountToken.update(
+    { usedAt: new Date() },
+    {
+      where: { tokenHash: hashToken(token), purpose, usedAt: null, expiresAt: { [Op.gt]: new Date() } },
+      returning: true,
+      transaction,
+    },
+  );
+  if (count !== 1) {
+    const what = purpose === 'verify' ? 'confirmation' : 'reset';
+    throw new AppError(400, 'token_invalid', `This ${what} link is invalid, used or expired: ask for a new one.`);
+  }
+  return rows[0].userId;
+}
+
+async function hasOpenInvitation(email: string, token: string): Promise<boolean> {
+  const invitation = await Invitation.findOne({
+    where: { tokenHash: hashToken(token), email, acceptedAt: null, expiresAt: { [Op.gt]: new Date() } },
+  });
+  return invitation !== null;
+}
+
+export async function signUp(ctx: AppContext, body: SignUpBody): Promise<void> {
+  if (await User.findOne({ where: { email: body.email } })) {
+    throw new AppError(409, 'email_taken', 'An account with this e-mail already exists: sign in, or reset the password.');
+  }
+  // Arriving from an invitation sent to this address proves the address, so no second mail.
+  const verifiedByInvitation = body.invitation ? await hasOpenInvitation(body.email, body.invitation) : false;
+  const user = await User.create({
+    email: body.email,
+    name: body.name,
+    passwordHash: await hashPassword(body.password),
+    emailVerifiedAt: verifiedByInvitation ? new Date() : null,
+  });
+  if (!verifiedByInvitation) await sendVerification(ctx, user);
+}
+
+export async function sendVerification(ctx: AppContext, user: User): Promise<void> {
+  const token = await issueToken(user.id, 'verify', VERIFY_TTL_MS);
+  await ctx.mailer.send(verificationMail(ctx.config.appUrl, user.email, user.name, token));
+}
+
+export async function resendVerification(ctx: AppContext, email: string): Promise<void> {
+  const user = await User.findOne({ where: { email, emailVerifiedAt: null } });
+  if (user) await sendVerification(ctx, user);
+}
+
+export async function verifyEmail(token: string): Promise<void> {
+  const userId = await consumeToken(token, 'verify');
+  await User.update({ emailVerifiedAt: new Date() }, { where: { id: userId, emailVerifiedAt: null } });
+}
+
+export type PasswordCheck = { user: User } | { failure: 'wrong' | 'unverified' | 'disabled' };
+
+// One bcrypt comparison whether or not the address exists, so timing does not reveal accounts.
+const DUMMY_HASH = bcrypt.hashSync('not-a-real-password', BCRYPT_ROUNDS);
+
+export async function checkPassword(email: string, password: string): Promise<PasswordCheck> {
+  const user = await User.findOne({ where: { email: email.trim().toLowerCase() } });
+  const matches = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH);
+  if (!user || !matches) return { failure: 'wrong' };
+  if (user.disabledAt) return { failure: 'disabled' };
+  if (!user.emailVerifiedAt) return { failure: 'unverified' };
+  return { user };
+}
+
+export async function requestReset(ctx: AppContext, email: string): Promise<void> {
+  const user = await User.findOne({ where: { email } });
+  if (!user || user.disabledAt) return;
+  const token = await issueToken(user.id, 'reset', RESET_TTL_MS);
+  await ctx.mailer.send(resetMail(ctx.config.appUrl, user.email, user.name, token));
+}
+
+export async function resetPassword(ctx: AppContext, body: ResetBody): Promise<void> {
+  const passwordHash = await hashPassword(body.password);
+  await ctx.sequelize.transaction(async (transaction) => {
+    const userId = await consumeToken(body.token, 'reset', transaction);
+    // Following the e-mailed link also proves the address.
+    await User.update({ passwordHash }, { where: { id: userId }, transaction });
+    await User.update({ emailVerifiedAt: new Date() }, { where: { id: userId, emailVerifiedAt: null }, transaction });
+    await endSessionsOf(ctx, userId, transaction);
+  });
+}
+
+/** Signs a person out everywhere (after a password reset or when an admin disables them). */
+export async function endSessionsOf(ctx: AppContext, userId: number, transaction?: Transaction): Promise<void> {
+  await ctx.sequelize.query(`DELETE FROM "session" WHERE (sess -> 'passport' ->> 'user') = :userId`, {
+    replacements: { userId: String(userId) },
+    transaction,
+  });
+}
+
+export async function updateAccount(user: User, body: UpdateAccountBody): Promise<User> {
+  return user.update({ ...(body.name ? { name: body.name } : {}), ...(body.areaUnit ? { areaUnit: body.areaUnit } : {}) });
+}
+
+export async function changePassword(user: User, body: ChangePasswordBody): Promise<void> {
+  if (!(await bcrypt.compare(body.currentPassword, user.passwordHash))) {
+    throw new AppError(400, 'wrong_password', 'The current password is not right: type it again, or use "Forgot password".');
+  }
+  await user.update({ passwordHash: await hashPassword(body.newPassword) });
+}

@@ -1,0 +1,5 @@
+export * from './error';
+export * from './auth';
+export * from './team';
+export * from './admin';
+export * from './outbox';
