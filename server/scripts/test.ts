@@ -39,7 +39,8 @@ async function main(): Promise<number> {
   await dropTestDatabases(urlFor('postgres'), true);
   await prepareDatabase(urlFor(TEMPLATE), { seed: false });
   ensureDebianPackages(testPackages, 'the test suite');
-  buildWebIfChanged();
+  // API-only work can skip the bundle: PATCHCAST_SKIP_WEB_BUILD=1 npm test -- --selectProjects api
+  if (!process.env.PATCHCAST_SKIP_WEB_BUILD) buildWebIfChanged();
 
   const jest = spawnSync(process.execPath, [path.join(repoRoot, 'node_modules', 'jest', 'bin', 'jest.js'), '--runInBand', ...process.argv.slice(2)], {
     cwd: repoRoot,
