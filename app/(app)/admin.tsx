@@ -1,0 +1,3 @@
+import { AdminScreen } from '@/features/admin/AdminScreen';
+
+export default AdminScreen;

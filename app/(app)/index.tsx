@@ -1,0 +1,3 @@
+import { StudyAreaListScreen } from '@/features/studyAreas/StudyAreaListScreen';
+
+export default StudyAreaListScreen;

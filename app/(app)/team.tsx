@@ -1,0 +1,3 @@
+import { TeamScreen } from '@/features/teams/TeamScreen';
+
+export default TeamScreen;

@@ -1,0 +1,3 @@
+import { ForgotScreen } from '@/features/auth/ForgotScreen';
+
+export default ForgotScreen;

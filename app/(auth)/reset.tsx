@@ -1,0 +1,3 @@
+import { ResetScreen } from '@/features/auth/ResetScreen';
+
+export default ResetScreen;

@@ -1,0 +1,3 @@
+import { VerifyScreen } from '@/features/auth/VerifyScreen';
+
+export default VerifyScreen;
