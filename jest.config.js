@@ -28,7 +28,7 @@ module.exports = {
     {
       ...common,
       displayName: 'unit',
-      testMatch: ['<rootDir>/tests/unit/**/*.test.ts', '<rootDir>/shared/**/*.test.ts'],
+      testMatch: ['<rootDir>/tests/unit/**/*.test.ts', '<rootDir>/shared/**/*.test.ts', '<rootDir>/features/**/*.test.ts'],
     },
     {
       ...common,

@@ -1,5 +1,4 @@
 import { IBMPlexMono_400Regular } from '@expo-google-fonts/ibm-plex-mono/400Regular';
-import { IBMPlexMono_500Medium } from '@expo-google-fonts/ibm-plex-mono/500Medium';
 import { IBMPlexSans_400Regular } from '@expo-google-fonts/ibm-plex-sans/400Regular';
 import { IBMPlexSans_500Medium } from '@expo-google-fonts/ibm-plex-sans/500Medium';
 import { IBMPlexSans_600SemiBold } from '@expo-google-fonts/ibm-plex-sans/600SemiBold';
@@ -11,17 +10,17 @@ import { useState, type ReactElement } from 'react';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
 
 import { createQueryClient } from '@/features/api/queryClient';
+import { markSignedOut } from '@/features/auth/queries';
 
 export { RouteErrorBoundary as ErrorBoundary } from '@/features/shell/RouteErrorBoundary';
 
 export default function RootLayout(): ReactElement | null {
-  const [queryClient] = useState(createQueryClient);
+  const [queryClient] = useState(() => createQueryClient({ onUnauthorized: markSignedOut }));
   const [fontsLoaded, fontError] = useFonts({
     IBMPlexSans_400Regular,
     IBMPlexSans_500Medium,
     IBMPlexSans_600SemiBold,
     IBMPlexMono_400Regular,
-    IBMPlexMono_500Medium,
   });
   if (!fontsLoaded && !fontError) return null;
   return (

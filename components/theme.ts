@@ -40,7 +40,6 @@ export const fonts = {
   medium: 'IBMPlexSans_500Medium',
   semibold: 'IBMPlexSans_600SemiBold',
   mono: 'IBMPlexMono_400Regular',
-  monoMedium: 'IBMPlexMono_500Medium',
 } as const;
 
 export const typeScale = {

@@ -20,6 +20,7 @@ import { teamRoutes } from './routes/teams';
 import { invitationRoutes } from './routes/invitations';
 import { adminRoutes } from './routes/admin';
 import { devRoutes } from './routes/dev';
+import { studyAreaRoutes, teamStudyAreaRoutes } from './routes/study-areas';
 
 export type App = { app: express.Express; close(): Promise<void> };
 
@@ -51,6 +52,8 @@ export function createApp(ctx: AppContext): App {
   api.use('/invitations', invitationRoutes(ctx));
   api.use('/account', requireSignIn, accountRoutes());
   api.use('/teams', requireSignIn, teamRoutes(ctx));
+  api.use('/teams/:teamId/study-areas', requireSignIn, teamStudyAreaRoutes(ctx));
+  api.use('/study-areas', requireSignIn, studyAreaRoutes(ctx));
   api.use('/admin', requireSignIn, adminRoutes(ctx));
   if (config.outboxEnabled) api.use('/dev', requireSignIn, devRoutes(ctx));
   api.use(apiNotFound);

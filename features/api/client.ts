@@ -4,7 +4,7 @@ import { apiErrorSchema, csrfResponseSchema } from '@/shared/schemas';
 
 import { ApiError } from './ApiError';
 
-export const API_BASE = '/api/v1';
+const API_BASE = '/api/v1';
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
 

@@ -1,4 +1,11 @@
-import { useMutation, useQuery, useQueryClient, type UseMutationResult, type UseQueryResult } from '@tanstack/react-query';
+import {
+  useMutation,
+  useQuery,
+  useQueryClient,
+  type QueryClient,
+  type UseMutationResult,
+  type UseQueryResult,
+} from '@tanstack/react-query';
 
 import {
   meResponseSchema,
@@ -35,6 +42,11 @@ export function useMe(): UseQueryResult<User | null> {
     },
     staleTime: STALE.MINUTES.FIVE,
   });
+}
+
+/** A request answered 401: the session is gone, so the signed-in layout sends the person to sign in. */
+export function markSignedOut(queryClient: QueryClient): void {
+  if (queryClient.getQueryData(authKeys.me()) !== null) queryClient.setQueryData(authKeys.me(), null);
 }
 
 /** Replaces the session: new CSRF token, no data of the previous person, `me` set to `user`. */

@@ -2,7 +2,9 @@
 // `{ error: { code, message, details? } }` without leaking stack traces.
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { Logger } from 'pino';
+import { MulterError } from 'multer';
 import type { ApiErrorBody } from '../../shared/schemas';
+import { BoundaryInputError } from '../../shared/geo';
 
 export class AppError extends Error {
   constructor(
@@ -39,9 +41,19 @@ function fromHttpError(err: { status?: number; statusCode?: number; type?: strin
   return new AppError(status, 'bad_request', err.message ?? 'The request could not be read.');
 }
 
+/** Input errors raised by shared/ readers and by multer become 4xx answers with their own message. */
+function fromInputError(err: unknown): AppError | null {
+  if (err instanceof BoundaryInputError) return new AppError(400, `boundary_${err.code.replace(/-/g, '_')}`, `The boundary was refused: ${err.message}.`);
+  if (err instanceof MulterError) {
+    if (err.code === 'LIMIT_FILE_SIZE') return new AppError(413, 'file_too_large', 'The file is larger than 25 MB: simplify the boundary or zip it, and upload again.');
+    return new AppError(400, 'bad_upload', `The upload could not be read (${err.message}): send one file in the form field "file".`);
+  }
+  return null;
+}
+
 export function errorHandler(logger: Logger): ErrorRequestHandler {
   return (err, req, res, _next) => {
-    const appError = err instanceof AppError ? err : fromHttpError(err as Record<string, never>);
+    const appError = err instanceof AppError ? err : (fromInputError(err) ?? fromHttpError(err as Record<string, never>));
     if (appError) {
       res.status(appError.status).json(errorBody(appError));
       return;

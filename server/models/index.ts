@@ -5,8 +5,11 @@ import { Team, initTeam } from './team';
 import { Membership, initMembership } from './membership';
 import { Invitation, initInvitation } from './invitation';
 import { AccountToken, initAccountToken } from './account-token';
+import { StudyArea, initStudyArea } from './study-area';
+import { CoverStateRow, initCoverState } from './cover-state';
+import { StartCover, initStartCover } from './start-cover';
 
-export { User, Team, Membership, Invitation, AccountToken };
+export { User, Team, Membership, Invitation, AccountToken, StudyArea, CoverStateRow, StartCover };
 
 export function initModels(sequelize: Sequelize): void {
   initUser(sequelize);
@@ -14,8 +17,13 @@ export function initModels(sequelize: Sequelize): void {
   initMembership(sequelize);
   initInvitation(sequelize);
   initAccountToken(sequelize);
+  initStudyArea(sequelize);
+  initCoverState(sequelize);
+  initStartCover(sequelize);
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
   Invitation.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
   Invitation.belongsTo(User, { foreignKey: 'invitedBy', as: 'inviter' });
+  StudyArea.hasMany(CoverStateRow, { foreignKey: 'studyAreaId', as: 'states' });
+  StudyArea.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
 }

@@ -9,7 +9,7 @@ export async function prepareDatabase(databaseUrl: string, options: { seed: bool
   const sequelize = connectDatabase(databaseUrl);
   try {
     const applied = await migrateUp(sequelize);
-    if (options.seed) await seedDemo();
+    if (options.seed) await seedDemo(sequelize);
     return applied;
   } finally {
     await sequelize.close();

@@ -15,6 +15,8 @@ const TEMPLATE = 'patchcast_test_template';
 /** Debian packages the tests use as outside references or drivers (probe file for each). */
 const testPackages = {
   chromium: '/usr/bin/chromium',
+  'gdal-bin': '/usr/bin/ogr2ogr',
+  'python3-numpy': '/usr/lib/python3/dist-packages/numpy/__init__.py',
 };
 
 async function dropTestDatabases(adminUrl: string, includeTemplate: boolean): Promise<void> {

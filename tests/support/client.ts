@@ -8,6 +8,7 @@ export type Client = {
   get(url: string): request.Test;
   post(url: string, body?: object): Promise<request.Response>;
   patch(url: string, body?: object): Promise<request.Response>;
+  put(url: string, body?: object): Promise<request.Response>;
   delete(url: string): Promise<request.Response>;
   signIn(email: string, password: string): Promise<request.Response>;
 };
@@ -19,7 +20,7 @@ export function client(app: Express): Client {
     token = (await agent.get('/api/v1/auth/csrf').expect(200)).body.csrfToken;
     return token;
   };
-  const send = async (method: 'post' | 'patch' | 'delete', url: string, body?: object): Promise<request.Response> => {
+  const send = async (method: 'post' | 'patch' | 'put' | 'delete', url: string, body?: object): Promise<request.Response> => {
     if (!token) await refreshCsrf();
     const req = agent[method](url).set('x-csrf-token', token);
     return body === undefined ? req : req.send(body);
@@ -30,6 +31,7 @@ export function client(app: Express): Client {
     get: (url) => agent.get(url),
     post: (url, body) => send('post', url, body),
     patch: (url, body) => send('patch', url, body),
+    put: (url, body) => send('put', url, body),
     delete: (url) => send('delete', url),
     async signIn(email, password) {
       const res = await send('post', '/api/v1/auth/sign-in', { email, password });

@@ -8,7 +8,7 @@ export type LiveServer = TestApp & { url: string };
 
 export async function startLiveServer(): Promise<LiveServer> {
   const t = await startTestApp();
-  await seedDemo();
+  await seedDemo(t.sequelize);
   const server = await new Promise<Server>((resolve) => {
     const s = t.app.listen(0, '127.0.0.1', () => resolve(s));
   });

@@ -1,0 +1,7 @@
+// The parts of jstat (no bundled types) that the Markov engine uses.
+declare module 'jstat' {
+  export const jStat: {
+    chisquare: { cdf(x: number, dof: number): number; inv(p: number, dof: number): number };
+    normal: { inv(p: number, mean: number, sd: number): number };
+  };
+}
