@@ -43,7 +43,7 @@ function fromHttpError(err: { status?: number; statusCode?: number; type?: strin
 
 /** Input errors raised by shared/ readers and by multer become 4xx answers with their own message. */
 function fromInputError(err: unknown): AppError | null {
-  if (err instanceof BoundaryInputError) return new AppError(400, `boundary_${err.code.replace(/-/g, '_')}`, `The boundary was refused: ${err.message}.`);
+  if (err instanceof BoundaryInputError) return new AppError(400, `boundary_${err.code.replace(/-/g, '_')}`, `The file was refused: ${err.message}.`);
   if (err instanceof MulterError) {
     if (err.code === 'LIMIT_FILE_SIZE') return new AppError(413, 'file_too_large', 'The file is larger than 25 MB: simplify the boundary or zip it, and upload again.');
     return new AppError(400, 'bad_upload', `The upload could not be read (${err.message}): send one file in the form field "file".`);

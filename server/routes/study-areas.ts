@@ -7,6 +7,7 @@ import { teamAccess } from '../services/teams';
 import * as studyAreas from '../services/study-areas';
 import * as startCover from '../services/start-cover';
 import {
+  coverMapFieldsSchema,
   coverStatesBodySchema,
   createStudyAreaFieldsSchema,
   idParamSchema,
@@ -84,6 +85,16 @@ export function studyAreaRoutes(ctx: AppContext): Router {
     const access = await studyAreaOf(req, EDITORS);
     const body = parseInput(proportionsStartCoverBodySchema, req.body, 'body');
     res.json({ startCover: await startCover.setStartCoverByProportions(access, body) });
+  });
+
+  router.post('/:studyAreaId/start-cover/map/inspect', singleUpload, async (req, res) => {
+    res.json(await startCover.inspectCoverMap(await studyAreaOf(req, EDITORS), req.file));
+  });
+
+  router.post('/:studyAreaId/start-cover/map', singleUpload, async (req, res) => {
+    const access = await studyAreaOf(req, EDITORS);
+    const fields = parseInput(coverMapFieldsSchema, req.body ?? {}, 'body');
+    res.json({ startCover: await startCover.setStartCoverFromMap(access, req.file, fields) });
   });
 
   router.get('/:studyAreaId/source', async (req, res) => {

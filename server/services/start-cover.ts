@@ -1,10 +1,12 @@
 // Start cover: the state of every patch at step 0, by proportions (seeded) or from a cover map.
-import { randomBytes } from 'node:crypto';
+import { createHash, randomBytes } from 'node:crypto';
 import { StartCover, StudyArea } from '../models';
 import { AppError, forbidden } from '../http/errors';
 import { assignByProportions, checkProportions, CoverInputError } from '../../shared/cover/proportions';
-import type { ProportionsStartCoverBody, StartCoverSummary } from '../../shared/schemas';
-import type { StudyAreaAccess } from './study-areas';
+import { assignFromCoverMap } from '../../shared/cover/cover-map';
+import { readPolygonFeatures, type PolygonFeature } from '../../shared/geo';
+import type { CoverMapFields, CoverMapInspection, ProportionsStartCoverBody, StartCoverSummary } from '../../shared/schemas';
+import type { StudyAreaAccess, UploadedFile } from './study-areas';
 
 function summarise(cover: StartCover, areas: Float32Array, stateCount: number): StartCoverSummary {
   const patches = new Array<number>(stateCount).fill(0);
@@ -26,11 +28,13 @@ function summarise(cover: StartCover, areas: Float32Array, stateCount: number): 
   };
 }
 
+// Copies into aligned buffers: a Buffer from the pool may start at an odd offset.
+const float32s = (bytes: Buffer): Float32Array => new Float32Array(new Uint8Array(bytes).buffer);
+const int32s = (bytes: Buffer): Int32Array => new Int32Array(new Uint8Array(bytes).buffer);
+
 async function patchAreas(studyAreaId: number): Promise<Float32Array> {
   const row = await StudyArea.scope('withGrid').findByPk(studyAreaId, { attributes: ['patchAreas'] });
-  const bytes = row!.patchAreas;
-  // Copy into an aligned buffer: a Buffer from the pool may start at an odd offset.
-  return new Float32Array(new Uint8Array(bytes).buffer);
+  return float32s(row!.patchAreas);
 }
 
 export async function startCoverSummary(access: StudyAreaAccess): Promise<StartCoverSummary | null> {
@@ -39,8 +43,89 @@ export async function startCoverSummary(access: StudyAreaAccess): Promise<StartC
   return summarise(cover, await patchAreas(access.studyArea.id), access.studyArea.states?.length ?? 0);
 }
 
-export async function setStartCoverByProportions(access: StudyAreaAccess, body: ProportionsStartCoverBody): Promise<StartCoverSummary> {
+function requireEditor(access: StudyAreaAccess): void {
   if (access.role === 'viewer') throw forbidden('Only owners and editors can set the start cover.');
+}
+
+function requireMapFile(file: UploadedFile | undefined): UploadedFile {
+  if (!file) throw new AppError(400, 'file_missing', 'Attach the cover map as the form field "file" (GeoJSON, zipped shapefile or KML with polygons).');
+  return file;
+}
+
+const MAX_VALUES_LISTED = 100;
+
+/** The cover map's attribute names with their distinct values, for the mapping step. */
+export async function inspectCoverMap(access: StudyAreaAccess, file: UploadedFile | undefined): Promise<CoverMapInspection> {
+  requireEditor(access);
+  const upload = requireMapFile(file);
+  const { features, warnings } = await readPolygonFeatures(new Uint8Array(upload.buffer), upload.originalname);
+  const tallies = new Map<string, Map<string, number>>();
+  for (const f of features) {
+    for (const [name, value] of Object.entries(f.properties)) {
+      if (value === null || typeof value === 'object') continue;
+      const tally = tallies.get(name) ?? new Map<string, number>();
+      tally.set(String(value), (tally.get(String(value)) ?? 0) + 1);
+      tallies.set(name, tally);
+    }
+  }
+  const properties = [...tallies].map(([name, tally]) => ({
+    name,
+    values: [...tally].map(([value, count]) => ({ value, count })).sort((a, b) => b.count - a.count || a.value.localeCompare(b.value)).slice(0, MAX_VALUES_LISTED),
+  }));
+  return { featureCount: features.length, properties, warnings };
+}
+
+function parseMapping(json: string, codes: string[]): Map<string, number> {
+  let raw: unknown;
+  try {
+    raw = JSON.parse(json);
+  } catch {
+    throw new AppError(400, 'invalid_input', 'mapping must be JSON: an object from map values to cover-state codes, e.g. {"sage": "SS"}.');
+  }
+  if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) throw new AppError(400, 'invalid_input', 'mapping must be a JSON object from map values to state codes.');
+  const mapping = new Map<string, number>();
+  for (const [value, code] of Object.entries(raw)) {
+    const index = codes.indexOf(String(code));
+    if (index < 0) throw new AppError(400, 'invalid_mapping', `The map value "${value}" is mapped to "${String(code)}", which is not a cover state of this study area (${codes.join(', ')}).`);
+    mapping.set(value, index);
+  }
+  return mapping;
+}
+
+export async function setStartCoverFromMap(access: StudyAreaAccess, file: UploadedFile | undefined, fields: CoverMapFields): Promise<StartCoverSummary> {
+  requireEditor(access);
+  const upload = requireMapFile(file);
+  const codes = (access.studyArea.states ?? []).map((s) => s.code);
+  const mapping = parseMapping(fields.mapping, codes);
+  const fallback = fields.fallback ? codes.indexOf(fields.fallback) : null;
+  if (fallback === -1) throw new AppError(400, 'invalid_mapping', `The fallback "${fields.fallback}" is not a cover state of this study area (${codes.join(', ')}).`);
+  const { features } = await readPolygonFeatures(new Uint8Array(upload.buffer), upload.originalname);
+  if (!features.some((f) => fields.property in f.properties)) {
+    throw new AppError(400, 'invalid_mapping', `No polygon in the map has the attribute "${fields.property}"; choose one of the attributes the map has.`);
+  }
+  const row = await StudyArea.scope('withGrid').findByPk(access.studyArea.id);
+  const grid = { spec: row!.gridSpec, cells: int32s(row!.patchCells), areas: float32s(row!.patchAreas), totalAreaM2: row!.totalAreaM2 };
+  const stateOf = (f: PolygonFeature): number | null => mapping.get(String(f.properties[fields.property])) ?? null;
+  const { states, unmatchedCount } = assignFromCoverMap(grid, row!.boundary, features, stateOf, fallback);
+  if (unmatchedCount > 0 && fallback === null) {
+    throw new AppError(400, 'unmatched_patches', `${unmatchedCount} patch(es) lie under no mapped polygon: choose a fallback state for them, or map more values.`, { unmatchedCount });
+  }
+  const [cover] = await StartCover.upsert({
+    studyAreaId: access.studyArea.id,
+    method: 'cover-map',
+    proportions: null,
+    seed: null,
+    states: Buffer.from(states.buffer, states.byteOffset, states.byteLength),
+    unmatchedCount,
+    mapping: Object.fromEntries([...mapping].map(([value, index]) => [value, codes[index]])),
+    sourceName: upload.originalname,
+    sourceSha256: createHash('sha256').update(upload.buffer).digest('hex'),
+  });
+  return summarise(cover, grid.areas, codes.length);
+}
+
+export async function setStartCoverByProportions(access: StudyAreaAccess, body: ProportionsStartCoverBody): Promise<StartCoverSummary> {
+  requireEditor(access);
   const { studyArea } = access;
   const names = (studyArea.states ?? []).map((s) => s.name);
   try {

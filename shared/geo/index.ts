@@ -1,6 +1,6 @@
 // Boundary import and the equal-area patch grid: the public surface of shared/geo.
 export { BoundaryInputError, type BoundaryErrorCode } from './errors';
-export { detectFormat, readBoundary, type ReadBoundaryOptions } from './read-boundary';
+export { detectFormat, readBoundary, readPolygonFeatures, type PolygonFeature, type ReadBoundaryOptions } from './read-boundary';
 export { geodesicArea } from './geodesic-area';
 export { boundaryCentre, laeaDefinition, localProjection, projectionFor, type LocalProjection } from './laea';
 export { projectBoundary, type ProjectedBoundary } from './projected-boundary';

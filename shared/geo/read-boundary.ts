@@ -69,6 +69,25 @@ function checkCrossings(candidate: LonLatCandidate): void {
   );
 }
 
+/** A polygon feature of a cover map, in lon/lat, with its attributes. */
+export type PolygonFeature = { label: string; properties: Record<string, unknown>; parts: LonLatCandidate['parts'] };
+
+/**
+ * Reads every polygon feature of a file (a cover map) with its properties, checked and in lon/lat
+ * like a boundary, but neither merged nor tested for self-intersection (a map is not an outline).
+ */
+export async function readPolygonFeatures(input: Uint8Array, fileName?: string): Promise<{ features: PolygonFeature[]; warnings: string[] }> {
+  if (input.length === 0) throw new BoundaryInputError('empty', 'the file is empty');
+  const source = await readSource(input, detectFormat(input, fileName));
+  if (source.candidates.length === 0) throw new BoundaryInputError('no-polygon', 'the file has no Polygon or MultiPolygon features');
+  checkVertexCount(countPositions(source.candidates));
+  source.candidates.forEach(checkStructure);
+  const features = source.candidates.map((c) => toLonLatCandidate(c, source.reprojectFrom));
+  checkLonLatRange(features, PROJECTED_HINTS[source.format]);
+  const warnings = source.ignored.length > 0 ? [`ignored ${source.ignored.length} non-polygon feature(s): ${source.ignored.join(', ')}`] : [];
+  return { features, warnings: [...source.notes, ...warnings] };
+}
+
 /** Reads a boundary file (bytes, or text for GeoJSON/KML) into a validated lon/lat boundary. */
 export async function readBoundary(input: Uint8Array | string, options: ReadBoundaryOptions = {}): Promise<Boundary> {
   const bytes = typeof input === 'string' ? new TextEncoder().encode(input) : input;

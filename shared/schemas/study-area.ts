@@ -137,3 +137,27 @@ export const patchGridResponseSchema = z.object({
   areas: z.string(),
 });
 export type PatchGridResponse = z.infer<typeof patchGridResponseSchema>;
+
+/** POST /study-areas/:id/start-cover/map/inspect (multipart `file`) — the cover map's attribute names and values. */
+export const coverMapInspectionSchema = z.object({
+  featureCount: z.number().int(),
+  properties: z.array(
+    z.object({
+      name: z.string(),
+      /** Distinct values with how many polygons carry each (the 100 commonest). */
+      values: z.array(z.object({ value: z.string(), count: z.number().int() })),
+    }),
+  ),
+  warnings: z.array(z.string()),
+});
+export type CoverMapInspection = z.infer<typeof coverMapInspectionSchema>;
+
+/** Multipart text fields of POST /study-areas/:id/start-cover/map (with the file as `file`). */
+export const coverMapFieldsSchema = z.object({
+  property: z.string({ error: 'property is required: the attribute that names the cover' }).trim().min(1, 'property must not be empty'),
+  /** JSON text: an object from the map's values to cover-state codes. */
+  mapping: z.string({ error: 'mapping is required: a JSON object from map values to state codes' }),
+  /** Code of the state given to patches under no polygon or with an unmapped value; required when there are any. */
+  fallback: z.string().trim().optional(),
+});
+export type CoverMapFields = z.infer<typeof coverMapFieldsSchema>;

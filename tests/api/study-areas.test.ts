@@ -76,7 +76,7 @@ test('when the cell size gives more than 250,000 patches, then 400 names the sma
 });
 
 test.each([
-  ['a file that is not a boundary', Buffer.from('hello'), 'notes.txt', /boundary was refused/],
+  ['a file that is not a boundary', Buffer.from('hello'), 'notes.txt', /file was refused: .*neither GeoJSON, KML nor a zipped shapefile/],
   ['an unclosed ring', Buffer.from(JSON.stringify({ type: 'Polygon', coordinates: [[[0, 0], [1, 0], [1, 1], [0, 1]]] })), 'open.geojson', /clos/i],
   ['a bow-tie polygon', Buffer.from(JSON.stringify({ type: 'Polygon', coordinates: [[[0, 0], [1, 1], [1, 0], [0, 1], [0, 0]]] })), 'bowtie.geojson', /intersect|cross/i],
 ])('when the upload is %s, then 400 says what is wrong', async (_what, file, name, message) => {
@@ -149,4 +149,69 @@ test('when the patch grid is fetched, then the decoded areas add up to the store
   const detail = (await as.viewer.get(`/api/v1/study-areas/${id}`)).body.studyArea;
   expect(areas.reduce((a, b) => a + b, 0)).toBeCloseTo(detail.totalAreaM2, -2);
   expect((await as.outsider.get(`/api/v1/study-areas/${id}/patches`)).status).toBe(404);
+});
+
+describe('start cover from a cover map', () => {
+  let id: number;
+  // An invented two-polygon cover map: west and east halves of the boundary's bounding box.
+  const coords = JSON.parse(cinderFlat.toString()).features[0].geometry.coordinates.flat(1) as [number, number][];
+  const lons = coords.map((c) => c[0]);
+  const lats = coords.map((c) => c[1]);
+  const [w, e, s, n] = [Math.min(...lons) - 0.01, Math.max(...lons) + 0.01, Math.min(...lats) - 0.01, Math.max(...lats) + 0.01];
+  const mid = (w + e) / 2;
+  const box = (x0: number, x1: number, y1: number) => [[[x0, s], [x1, s], [x1, y1], [x0, y1], [x0, s]]];
+  const coverMap = (northOfEast: number) =>
+    Buffer.from(
+      JSON.stringify({
+        type: 'FeatureCollection',
+        features: [
+          { type: 'Feature', properties: { veg: 'sage' }, geometry: { type: 'Polygon', coordinates: box(w, mid, n) } },
+          { type: 'Feature', properties: { veg: 'grass' }, geometry: { type: 'Polygon', coordinates: box(mid, e, northOfEast) } },
+        ],
+      }),
+    );
+
+  beforeAll(async () => {
+    id = (await upload(as.editor, `/api/v1/teams/${team.id}/study-areas`, cinderFlat, 'cf.geojson', { name: 'Mapped', cellSize: '250', states })).body.studyArea.id;
+  });
+
+  test('when the map is inspected, then its attribute and values are listed', async () => {
+    const res = await upload(as.editor, `/api/v1/study-areas/${id}/start-cover/map/inspect`, coverMap(n), 'map.geojson', {});
+    expect(res.status).toBe(200);
+    expect(res.body.featureCount).toBe(2);
+    expect(res.body.properties).toEqual([{ name: 'veg', values: [{ value: 'grass', count: 1 }, { value: 'sage', count: 1 }] }]);
+  });
+
+  test('when the map covers every patch, then both states get patches and none is flagged', async () => {
+    const res = await upload(as.editor, `/api/v1/study-areas/${id}/start-cover/map`, coverMap(n), 'map.geojson', { property: 'veg', mapping: JSON.stringify({ sage: 'SS', grass: 'PG' }) });
+    expect(res.status).toBe(200);
+    const cover = res.body.startCover;
+    expect(cover.method).toBe('cover-map');
+    expect(cover.unmatchedCount).toBe(0);
+    expect(cover.patches[0]).toBeGreaterThan(0);
+    expect(cover.patches[1]).toBeGreaterThan(0);
+  });
+
+  test('when some patches lie under no polygon, then it asks for a fallback, keeps the saved cover, and flags them once one is given', async () => {
+    const before = (await as.viewer.get(`/api/v1/study-areas/${id}/start-cover`)).body.startCover;
+    const partial = coverMap((s + n) / 2);
+    const refused = await upload(as.editor, `/api/v1/study-areas/${id}/start-cover/map`, partial, 'map.geojson', { property: 'veg', mapping: JSON.stringify({ sage: 'SS', grass: 'PG' }) });
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.message).toMatch(/lie under no mapped polygon: choose a fallback/);
+    expect((await as.viewer.get(`/api/v1/study-areas/${id}/start-cover`)).body.startCover).toEqual(before);
+
+    const saved = await upload(as.editor, `/api/v1/study-areas/${id}/start-cover/map`, partial, 'map.geojson', { property: 'veg', mapping: JSON.stringify({ sage: 'SS', grass: 'PG' }), fallback: 'SS' });
+    expect(saved.status).toBe(200);
+    expect(saved.body.startCover.unmatchedCount).toBe(refused.body.error.details.unmatchedCount);
+  });
+
+  test('when the mapping names an unknown state or attribute, then 400 says which', async () => {
+    const unknownState = await upload(as.editor, `/api/v1/study-areas/${id}/start-cover/map`, coverMap(n), 'map.geojson', { property: 'veg', mapping: JSON.stringify({ sage: 'XX' }) });
+    expect(unknownState.status).toBe(400);
+    expect(unknownState.body.error.message).toMatch(/"XX", which is not a cover state/);
+    const unknownProperty = await upload(as.editor, `/api/v1/study-areas/${id}/start-cover/map`, coverMap(n), 'map.geojson', { property: 'landcover', mapping: '{}' });
+    expect(unknownProperty.status).toBe(400);
+    expect(unknownProperty.body.error.message).toMatch(/attribute "landcover"/);
+    expect((await upload(as.viewer, `/api/v1/study-areas/${id}/start-cover/map/inspect`, coverMap(n), 'map.geojson', {})).status).toBe(403);
+  });
 });
