@@ -38,8 +38,20 @@ export function createApp(ctx: AppContext): App {
 
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
-  app.use(helmet({ contentSecurityPolicy: { directives: { 'script-src': ["'self'"], 'img-src': ["'self'", 'data:', 'blob:'] } } }));
-  app.use(pinoHttp({ logger, autoLogging: config.env !== 'test' }));
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'script-src': ["'self'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          // Over plain http (development on a LAN address) upgrading would break every request.
+          'upgrade-insecure-requests': config.env === 'production' ? [] : null,
+        },
+      },
+    }),
+  );
+  // Successful requests log at debug, so the console shows problems, not traffic.
+  app.use(pinoHttp({ logger, autoLogging: config.env !== 'test', customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'debug') }));
 
   const api = express.Router();
   api.use(express.json({ limit: '100kb' }));
