@@ -6,6 +6,7 @@ import { singleUpload } from '../http/upload';
 import { teamAccess } from '../services/teams';
 import * as studyAreas from '../services/study-areas';
 import * as startCover from '../services/start-cover';
+import * as exportsService from '../services/exports';
 import {
   coverMapFieldsSchema,
   coverStatesBodySchema,
@@ -71,6 +72,14 @@ export function studyAreaRoutes(ctx: AppContext): Router {
     const access = await studyAreaOf(req, EDITORS);
     const { states } = parseInput(coverStatesBodySchema, req.body, 'body');
     res.json({ states: await studyAreas.replaceStates(ctx, access, states) });
+  });
+
+  router.get('/:studyAreaId/patches.geojson', async (req, res) => {
+    await exportsService.streamPatchGeometry(res, await studyAreaOf(req));
+  });
+
+  router.get('/:studyAreaId/start-cover.geojson', async (req, res) => {
+    await exportsService.streamStartCover(res, await studyAreaOf(req));
   });
 
   router.get('/:studyAreaId/patches', async (req, res) => {

@@ -7,12 +7,12 @@ import { assignFromCoverMap } from '../../shared/cover/cover-map';
 import { readPolygonFeatures, type PolygonFeature } from '../../shared/geo';
 import type { CoverMapFields, CoverMapInspection, ProportionsStartCoverBody, StartCoverSummary } from '../../shared/schemas';
 import type { StudyAreaAccess, UploadedFile } from './study-areas';
+import { bytesOf, float32s, loadStoredGrid } from './stored-grid';
 
 function summarise(cover: StartCover, areas: Float32Array, stateCount: number): StartCoverSummary {
   const patches = new Array<number>(stateCount).fill(0);
   const areaM2 = new Array<number>(stateCount).fill(0);
-  const states = new Uint8Array(cover.states.buffer, cover.states.byteOffset, cover.states.byteLength);
-  states.forEach((s, i) => {
+  new Uint8Array(cover.states).forEach((s, i) => {
     patches[s] += 1;
     areaM2[s] += areas[i];
   });
@@ -27,10 +27,6 @@ function summarise(cover: StartCover, areas: Float32Array, stateCount: number): 
     updatedAt: cover.updatedAt.toISOString(),
   };
 }
-
-// Copies into aligned buffers: a Buffer from the pool may start at an odd offset.
-const float32s = (bytes: Buffer): Float32Array => new Float32Array(new Uint8Array(bytes).buffer);
-const int32s = (bytes: Buffer): Int32Array => new Int32Array(new Uint8Array(bytes).buffer);
 
 async function patchAreas(studyAreaId: number): Promise<Float32Array> {
   const row = await StudyArea.scope('withGrid').findByPk(studyAreaId, { attributes: ['patchAreas'] });
@@ -103,10 +99,9 @@ export async function setStartCoverFromMap(access: StudyAreaAccess, file: Upload
   if (!features.some((f) => fields.property in f.properties)) {
     throw new AppError(400, 'invalid_mapping', `No polygon in the map has the attribute "${fields.property}"; choose one of the attributes the map has.`);
   }
-  const row = await StudyArea.scope('withGrid').findByPk(access.studyArea.id);
-  const grid = { spec: row!.gridSpec, cells: int32s(row!.patchCells), areas: float32s(row!.patchAreas), totalAreaM2: row!.totalAreaM2 };
+  const { grid, boundary } = await loadStoredGrid(access.studyArea.id);
   const stateOf = (f: PolygonFeature): number | null => mapping.get(String(f.properties[fields.property])) ?? null;
-  const { states, unmatchedCount } = assignFromCoverMap(grid, row!.boundary, features, stateOf, fallback);
+  const { states, unmatchedCount } = assignFromCoverMap(grid, boundary, features, stateOf, fallback);
   if (unmatchedCount > 0 && fallback === null) {
     throw new AppError(400, 'unmatched_patches', `${unmatchedCount} patch(es) lie under no mapped polygon: choose a fallback state for them, or map more values.`, { unmatchedCount });
   }
@@ -115,7 +110,7 @@ export async function setStartCoverFromMap(access: StudyAreaAccess, file: Upload
     method: 'cover-map',
     proportions: null,
     seed: null,
-    states: Buffer.from(states.buffer, states.byteOffset, states.byteLength),
+    states: bytesOf(states),
     unmatchedCount,
     mapping: Object.fromEntries([...mapping].map(([value, index]) => [value, codes[index]])),
     sourceName: upload.originalname,
@@ -141,7 +136,7 @@ export async function setStartCoverByProportions(access: StudyAreaAccess, body: 
     method: body.method,
     proportions: body.proportions,
     seed,
-    states: Buffer.from(states.buffer, states.byteOffset, states.byteLength),
+    states: bytesOf(states),
     unmatchedCount: 0,
     mapping: null,
     sourceName: null,

@@ -17,6 +17,7 @@ import {
   type StudyAreaSummary,
 } from '../../shared/schemas';
 import type { TeamAccess } from './teams';
+import { bytesOf } from './stored-grid';
 
 export type UploadedFile = { originalname: string; buffer: Buffer };
 
@@ -95,8 +96,8 @@ export async function createStudyArea(ctx: Pick<AppContext, 'sequelize'>, access
         minFraction: fields.minFraction,
         gridSpec: grid.spec,
         patchCount: grid.cells.length,
-        patchCells: Buffer.from(grid.cells.buffer, grid.cells.byteOffset, grid.cells.byteLength),
-        patchAreas: Buffer.from(grid.areas.buffer, grid.areas.byteOffset, grid.areas.byteLength),
+        patchCells: bytesOf(grid.cells),
+        patchAreas: bytesOf(grid.areas),
         totalAreaM2: grid.totalAreaM2,
         createdBy: user.id,
       },

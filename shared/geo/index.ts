@@ -17,3 +17,4 @@ export {
 export { cellCentre, cellCentreLonLat, cellPolygon, patchCentroid, patchPolygon, rowCol } from './patch-geometry';
 export { MAX_VERTICES } from './validate';
 export type { Boundary, BoundaryFormat, LonLat, PickOption, PolygonRings, Ring } from './types';
+export { patchAttributes, patchFeatureCollection, type PatchProperties } from './patch-features';
