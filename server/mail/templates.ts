@@ -10,6 +10,14 @@ export function verificationMail(appUrl: string, to: string, name: string, token
   };
 }
 
+export function accountExistsMail(appUrl: string, to: string, name: string): OutgoingMail {
+  return {
+    to,
+    subject: 'Someone tried to sign up to Patchcast with your address',
+    text: `Hello ${name},\n\nSomeone (perhaps you) tried to create a Patchcast account with this address, which already has one.\nSign in here: ${appUrl}/sign-in\nForgot the password? Reset it: ${appUrl}/forgot\n\nIf it was not you, you can ignore this message; nothing has changed.\n`,
+  };
+}
+
 export function resetMail(appUrl: string, to: string, name: string, token: string): OutgoingMail {
   return {
     to,
@@ -23,5 +31,14 @@ export function invitationMail(appUrl: string, to: string, teamName: string, inv
     to,
     subject: `${inviter} invited you to ${teamName} on Patchcast`,
     text: `${inviter} invited you to join the team "${teamName}" on Patchcast as ${role}.\n\nAccept here (sign up or sign in with this address):\n${appUrl}/invitation?token=${token}\n\nThe invitation expires in 7 days.\n`,
+  };
+}
+
+export function runEndedMail(to: string, name: string, what: { scenario: string; studyArea: string; runId: number; ended: 'finished' | 'failed'; reason: string | null; link: string }): OutgoingMail {
+  const outcome = what.ended === 'finished' ? 'finished' : `failed: ${what.reason ?? 'no reason recorded'}`;
+  return {
+    to,
+    subject: `Run ${what.runId} of "${what.scenario}" ${what.ended}`,
+    text: `Hello ${name},\n\nRun ${what.runId} of the scenario "${what.scenario}" (${what.studyArea}) ${outcome}.\n\nOpen it here:\n${what.link}\n\nYou get this because you started the run or asked to hear about your team's runs (team settings).\n`,
   };
 }

@@ -50,7 +50,8 @@ export function authRoutes(ctx: AppContext, auth: passport.PassportStatic, limit
   router.post('/sign-up', limits.signUp, async (req, res) => {
     const body = parseInput(signUpBodySchema, req.body, 'body');
     await accounts.signUp(ctx, body);
-    res.status(201).json({ message: `Account created. If ${body.email} was not confirmed by an invitation, follow the link we just e-mailed to confirm it, then sign in.` });
+    // The same answer whether or not the address already has an account (no account enumeration).
+    res.status(201).json({ message: `Thanks. We have sent a message to ${body.email}: follow its link to confirm the address (not needed when you came from an invitation), then sign in.` });
   });
 
   router.post('/verify', async (req, res) => {

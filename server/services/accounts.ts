@@ -6,7 +6,7 @@ import { AccountToken, Invitation, User } from '../models';
 import type { AppContext } from '../context';
 import { AppError } from '../http/errors';
 import { HOUR_MS, hashToken, newLinkToken } from './tokens';
-import { resetMail, verificationMail } from '../mail/templates';
+import { accountExistsMail, resetMail, verificationMail } from '../mail/templates';
 import type { TokenPurpose } from '../models/account-token';
 import type { ChangePasswordBody, ResetBody, SignUpBody, UpdateAccountBody } from '../../shared/schemas';
 
@@ -47,8 +47,12 @@ async function hasOpenInvitation(email: string, token: string): Promise<boolean>
 }
 
 export async function signUp(ctx: AppContext, body: SignUpBody): Promise<void> {
-  if (await User.findOne({ where: { email: body.email } })) {
-    throw new AppError(409, 'email_taken', 'An account with this e-mail already exists: sign in, or reset the password.');
+  const existing = await User.findOne({ where: { email: body.email } });
+  if (existing) {
+    // Same answer as a new sign-up, so the form does not reveal who has an account; the owner of
+    // the address learns of the attempt by mail.
+    await ctx.mailer.send(accountExistsMail(ctx.config.appUrl, existing.email, existing.name));
+    return;
   }
   // Arriving from an invitation sent to this address proves the address, so no second mail.
   const verifiedByInvitation = body.invitation ? await hasOpenInvitation(body.email, body.invitation) : false;

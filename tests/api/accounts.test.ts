@@ -51,10 +51,14 @@ describe('sign-up, verification, sign-in, sign-out', () => {
     expect((await c.get('/api/v1/auth/me')).status).toBe(401);
   });
 
-  test('when the address is taken, then sign-up answers 409 with a message', async () => {
-    const res = await client(t.app).post('/api/v1/auth/sign-up', person);
-    expect(res.status).toBe(409);
-    expect(res.body.error.message).toMatch(/already exists/);
+  test('when the address is taken, then sign-up answers exactly as for a new address and tells the owner by mail', async () => {
+    const fresh = await client(t.app).post('/api/v1/auth/sign-up', { ...person, email: 'someone.new@example.org' });
+    const taken = await client(t.app).post('/api/v1/auth/sign-up', { ...person, password: 'another-password-9' });
+    expect(taken.status).toBe(fresh.status);
+    expect(taken.body.message.replace('lena.marsh@example.org', 'X')).toBe(fresh.body.message.replace('someone.new@example.org', 'X'));
+    await t.mailTo('lena.marsh@example.org', 'tried to sign up');
+    // The existing password still works: nothing was overwritten.
+    expect((await client(t.app).signIn(person.email, person.password)).status).toBe(200);
   });
 
   test('when sign-in succeeds, then the session id is a new one (no fixation)', async () => {
