@@ -15,6 +15,8 @@ export type SegmentedControlProps<V extends string | number> = {
   value: V;
   onChange: (value: V) => void;
   disabled?: boolean;
+  /** 'md' gives 44 px touch targets, for controls used often on phones. */
+  size?: 'sm' | 'md';
 };
 
 /** A single choice among a few options, as a radio group of chips that wrap on narrow screens. */
@@ -25,6 +27,7 @@ export function SegmentedControl<V extends string | number>({
   value,
   onChange,
   disabled = false,
+  size = 'sm',
 }: SegmentedControlProps<V>): ReactElement {
   return (
     <View style={styles.field}>
@@ -42,7 +45,7 @@ export function SegmentedControl<V extends string | number>({
               onPress={() => {
                 if (!selected) onChange(option.value);
               }}
-              style={[styles.chip, selected && styles.chipSelected, disabled && styles.disabled]}
+              style={[styles.chip, size === 'md' && styles.chipMd, selected && styles.chipSelected, disabled && styles.disabled]}
             >
               <Text variant="small" weight="medium" tone={selected ? 'inverse' : 'default'}>
                 {option.label}
@@ -67,6 +70,7 @@ const styles = StyleSheet.create({
     borderColor: colors.line,
     backgroundColor: colors.surface,
   },
+  chipMd: { minHeight: 44, paddingHorizontal: space.lg },
   chipSelected: { backgroundColor: colors.sage, borderColor: colors.sage },
   disabled: { opacity: 0.55 },
 });

@@ -6,7 +6,7 @@ import { colors, fonts, radius, space, typeScale } from './theme';
 
 export type TextFieldProps = Pick<
   TextInputProps,
-  'value' | 'onChangeText' | 'autoComplete' | 'keyboardType' | 'secureTextEntry' | 'autoFocus' | 'onSubmitEditing' | 'placeholder'
+  'value' | 'onChangeText' | 'autoComplete' | 'keyboardType' | 'secureTextEntry' | 'autoFocus' | 'onSubmitEditing' | 'placeholder' | 'multiline' | 'editable' | 'inputMode'
 > & {
   /** Visible label; also the input's accessible name. */
   label: string;
@@ -31,7 +31,7 @@ export function TextField({ label, error, hint, ...input }: TextFieldProps): Rea
         autoCapitalize="none"
         autoCorrect={false}
         placeholderTextColor={colors.basaltMuted}
-        style={[styles.input, error !== undefined && styles.inputError]}
+        style={[styles.input, input.multiline && styles.multiline, error !== undefined && styles.inputError]}
       />
       {message ? (
         <Text nativeID={messageId} variant="small" tone={error ? 'danger' : 'muted'}>
@@ -55,5 +55,6 @@ const styles = StyleSheet.create({
     fontFamily: fonts.regular,
     ...typeScale.body,
   },
+  multiline: { minHeight: 88, paddingVertical: space.sm, textAlignVertical: 'top' },
   inputError: { borderColor: colors.rust },
 });

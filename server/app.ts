@@ -21,6 +21,8 @@ import { invitationRoutes } from './routes/invitations';
 import { adminRoutes } from './routes/admin';
 import { devRoutes } from './routes/dev';
 import { studyAreaRoutes, teamStudyAreaRoutes } from './routes/study-areas';
+import { scenarioRoutes, studyAreaScenarioRoutes } from './routes/scenarios';
+import { studyAreaSurveyRoutes, surveyRoutes } from './routes/surveys';
 
 export type App = { app: express.Express; close(): Promise<void> };
 
@@ -65,7 +67,11 @@ export function createApp(ctx: AppContext): App {
   api.use('/account', requireSignIn, accountRoutes());
   api.use('/teams', requireSignIn, teamRoutes(ctx));
   api.use('/teams/:teamId/study-areas', requireSignIn, teamStudyAreaRoutes(ctx));
+  api.use('/study-areas/:studyAreaId/scenarios', requireSignIn, studyAreaScenarioRoutes(ctx));
+  api.use('/study-areas/:studyAreaId/surveys', requireSignIn, studyAreaSurveyRoutes(ctx));
   api.use('/study-areas', requireSignIn, studyAreaRoutes(ctx));
+  api.use('/scenarios', requireSignIn, scenarioRoutes(ctx));
+  api.use('/surveys', requireSignIn, surveyRoutes());
   api.use('/admin', requireSignIn, adminRoutes(ctx));
   if (config.outboxEnabled) api.use('/dev', requireSignIn, devRoutes(ctx));
   api.use(apiNotFound);

@@ -10,7 +10,7 @@ type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
 
 export type RequestOptions = {
   method?: Method;
-  /** Sent as JSON. */
+  /** Sent as JSON, or as multipart form data when it is a `FormData` (file uploads). */
   body?: unknown;
   signal?: AbortSignal;
 };
@@ -37,12 +37,14 @@ export function forgetCsrfToken(): void {
 
 function send(path: string, { method = 'GET', body, signal }: RequestOptions, token?: string): Promise<Response> {
   const headers: Record<string, string> = { accept: 'application/json' };
-  if (body !== undefined) headers['content-type'] = 'application/json';
+  const multipart = body instanceof FormData;
+  // The browser writes the multipart content type itself, with its boundary.
+  if (body !== undefined && !multipart) headers['content-type'] = 'application/json';
   if (token) headers['x-csrf-token'] = token;
   return fetch(`${API_BASE}${path}`, {
     method,
     headers,
-    body: body === undefined ? undefined : JSON.stringify(body),
+    body: body === undefined ? undefined : multipart ? body : JSON.stringify(body),
     credentials: 'same-origin',
     signal,
   });

@@ -11,6 +11,7 @@ import { LeaveTeam } from './LeaveTeam';
 import { MemberRow } from './MemberRow';
 import { NotifyRunsToggle } from './NotifyRunsToggle';
 import { PendingInvitations } from './PendingInvitations';
+import { AuditLog } from './AuditLog';
 import { useTeam } from './queries';
 import { RenameTeamForm } from './RenameTeamForm';
 
@@ -52,6 +53,9 @@ export function TeamDetails({ team, user }: TeamDetailsProps): ReactElement {
           </Section>
           <Section title="Team name">
             <RenameTeamForm key={detail.data.team.name} team={detail.data.team} />
+          </Section>
+          <Section title="Activity log" description="Invitations, role changes, removals and deletions, newest first.">
+            <AuditLog teamId={team.id} />
           </Section>
         </>
       ) : null}

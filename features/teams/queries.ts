@@ -2,6 +2,8 @@ import { useMutation, useQuery, useQueryClient, type UseMutationResult, type Use
 import { z } from 'zod';
 
 import {
+  auditLogSchema,
+  type AuditEventView,
   invitationSchema,
   memberSchema,
   teamDetailSchema,
@@ -23,6 +25,7 @@ export const teamsKeys = {
   all: ['teams'] as const,
   list: () => [...teamsKeys.all, 'list'] as const,
   detail: (teamId: number) => [...teamsKeys.all, 'detail', teamId] as const,
+  audit: (teamId: number) => [...teamsKeys.all, 'audit', teamId] as const,
 };
 
 const teamResponse = z.object({ team: teamSummarySchema });
@@ -44,6 +47,16 @@ export function useTeam(teamId: number | undefined): UseQueryResult<TeamDetail> 
     queryKey: teamsKeys.detail(teamId ?? 0),
     queryFn: ({ signal }) => apiRequest(`/teams/${teamId}`, teamDetailSchema, { signal }),
     enabled: teamId !== undefined,
+    staleTime: STALE.SECONDS.THIRTY,
+  });
+}
+
+/** Owners only: membership, role and deletion events, newest first. */
+export function useAuditLog(teamId: number, enabled: boolean): UseQueryResult<AuditEventView[]> {
+  return useQuery({
+    queryKey: teamsKeys.audit(teamId),
+    queryFn: async ({ signal }) => (await apiRequest(`/teams/${teamId}/audit`, auditLogSchema, { signal })).events,
+    enabled,
     staleTime: STALE.SECONDS.THIRTY,
   });
 }

@@ -5,6 +5,7 @@ import type { Logger } from 'pino';
 import { MulterError } from 'multer';
 import type { ApiErrorBody } from '../../shared/schemas';
 import { BoundaryInputError } from '../../shared/geo';
+import { MarkovInputError } from '../../shared/markov/errors';
 
 export class AppError extends Error {
   constructor(
@@ -44,9 +45,10 @@ function fromHttpError(err: { status?: number; statusCode?: number; type?: strin
 /** Input errors raised by shared/ readers and by multer become 4xx answers with their own message. */
 function fromInputError(err: unknown): AppError | null {
   if (err instanceof BoundaryInputError) return new AppError(400, `boundary_${err.code.replace(/-/g, '_')}`, `The file was refused: ${err.message}.`);
+  if (err instanceof MarkovInputError) return new AppError(400, 'invalid_input', `The input was refused: ${err.message}.`);
   if (err instanceof MulterError) {
     if (err.code === 'LIMIT_FILE_SIZE') return new AppError(413, 'file_too_large', 'The file is larger than 25 MB: simplify the boundary or zip it, and upload again.');
-    return new AppError(400, 'bad_upload', `The upload could not be read (${err.message}): send one file in the form field "file".`);
+    return new AppError(400, 'bad_upload', `The upload could not be read (${err.message}): send one file in the form field "file" (for a map pair, one in "earlier" and one in "later").`);
   }
   return null;
 }

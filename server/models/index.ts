@@ -8,8 +8,14 @@ import { AccountToken, initAccountToken } from './account-token';
 import { StudyArea, initStudyArea } from './study-area';
 import { CoverStateRow, initCoverState } from './cover-state';
 import { StartCover, initStartCover } from './start-cover';
+import { AuditEvent, initAuditEvent } from './audit-event';
+import { Scenario, initScenario } from './scenario';
+import { ScenarioPhaseRow, initScenarioPhase } from './scenario-phase';
+import { Survey, initSurvey } from './survey';
+import { SurveyFile, initSurveyFile } from './survey-file';
 
-export { User, Team, Membership, Invitation, AccountToken, StudyArea, CoverStateRow, StartCover };
+export { AuditEvent, User, Team, Membership, Invitation, AccountToken, StudyArea, CoverStateRow, StartCover };
+export { Scenario, ScenarioPhaseRow, Survey, SurveyFile };
 
 export function initModels(sequelize: Sequelize): void {
   initUser(sequelize);
@@ -20,10 +26,21 @@ export function initModels(sequelize: Sequelize): void {
   initStudyArea(sequelize);
   initCoverState(sequelize);
   initStartCover(sequelize);
+  initAuditEvent(sequelize);
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   Membership.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
   Invitation.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
   Invitation.belongsTo(User, { foreignKey: 'invitedBy', as: 'inviter' });
   StudyArea.hasMany(CoverStateRow, { foreignKey: 'studyAreaId', as: 'states' });
   StudyArea.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  initScenario(sequelize);
+  initScenarioPhase(sequelize);
+  initSurvey(sequelize);
+  initSurveyFile(sequelize);
+  Scenario.hasMany(ScenarioPhaseRow, { foreignKey: 'scenarioId', as: 'phases' });
+  Scenario.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  Scenario.belongsTo(User, { foreignKey: 'updatedBy', as: 'updater' });
+  ScenarioPhaseRow.belongsTo(Survey, { foreignKey: 'surveyId', as: 'survey' });
+  Survey.hasMany(SurveyFile, { foreignKey: 'surveyId', as: 'files' });
+  Survey.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
 }

@@ -64,7 +64,7 @@ export function studyAreaRoutes(ctx: AppContext): Router {
   });
 
   router.delete('/:studyAreaId', async (req, res) => {
-    await studyAreas.deleteStudyArea(await studyAreaOf(req, ['owner']));
+    await studyAreas.deleteStudyArea(ctx, await studyAreaOf(req, ['owner']), currentUser(req));
     res.status(204).end();
   });
 

@@ -3,6 +3,7 @@ import type { AppContext } from '../context';
 import { parseInput } from '../http/validate';
 import { currentUser } from '../http/require-user';
 import * as teams from '../services/teams';
+import { auditLog } from '../services/audit';
 import { idParamSchema, inviteBodySchema, memberChangeBodySchema, teamBodySchema, type Role } from '../../shared/schemas';
 
 const OWNER: readonly Role[] = ['owner'];
@@ -31,7 +32,11 @@ export function teamRoutes(ctx: AppContext): Router {
   router.patch('/:teamId', async (req, res) => {
     const team = await access(req, OWNER);
     const { name } = parseInput(teamBodySchema, req.body, 'body');
-    res.json({ team: await teams.renameTeam(team, name) });
+    res.json({ team: await teams.renameTeam(team, currentUser(req), name) });
+  });
+
+  router.get('/:teamId/audit', async (req, res) => {
+    res.json({ events: await auditLog(await access(req, OWNER)) });
   });
 
   router.post('/:teamId/invitations', async (req, res) => {
@@ -42,7 +47,7 @@ export function teamRoutes(ctx: AppContext): Router {
 
   router.delete('/:teamId/invitations/:invitationId', async (req, res) => {
     const team = await access(req, OWNER);
-    await teams.cancelInvitation(team, parseInput(idParamSchema, req.params.invitationId, 'path'));
+    await teams.cancelInvitation(team, currentUser(req), parseInput(idParamSchema, req.params.invitationId, 'path'));
     res.status(204).end();
   });
 
@@ -50,12 +55,12 @@ export function teamRoutes(ctx: AppContext): Router {
     const team = await access(req);
     const userId = parseInput(idParamSchema, req.params.userId, 'path');
     const body = parseInput(memberChangeBodySchema, req.body, 'body');
-    res.json({ member: await teams.changeMember(ctx, team, userId, body) });
+    res.json({ member: await teams.changeMember(ctx, team, currentUser(req), userId, body) });
   });
 
   router.delete('/:teamId/members/:userId', async (req, res) => {
     const team = await access(req);
-    await teams.removeMember(ctx, team, parseInput(idParamSchema, req.params.userId, 'path'));
+    await teams.removeMember(ctx, team, currentUser(req), parseInput(idParamSchema, req.params.userId, 'path'));
     res.status(204).end();
   });
 

@@ -10,7 +10,19 @@ import { ensureLocalCluster } from './postgres';
 import { prepareDatabase } from './prepare-database';
 import { ensureDebianPackages } from './system';
 
-const TEMPLATE = 'patchcast_test_template';
+// Names carry this run's process id, so concurrent `npm test` runs on one server never touch
+// each other's databases; leftovers of runs that died are dropped at the next start.
+const RUN_PREFIX = `patchcast_test_${process.pid}_`;
+const TEMPLATE = `${RUN_PREFIX}template`;
+
+function isAlive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch {
+    return false;
+  }
+}
 
 /** Debian packages the tests use as outside references or drivers (probe file for each). */
 const testPackages = {
@@ -19,14 +31,15 @@ const testPackages = {
   'python3-numpy': '/usr/lib/python3/dist-packages/numpy/__init__.py',
 };
 
-async function dropTestDatabases(adminUrl: string, includeTemplate: boolean): Promise<void> {
+/** Drops this run's databases and those of runs whose process is gone. */
+async function dropTestDatabases(adminUrl: string): Promise<void> {
   const client = new pg.Client({ connectionString: adminUrl });
   await client.connect();
   try {
-    const { rows } = await client.query<{ datname: string }>("SELECT datname FROM pg_database WHERE datname LIKE 'patchcast_test_%'");
+    const { rows } = await client.query<{ datname: string }>("SELECT datname FROM pg_database WHERE datname LIKE 'patchcast\\_test\\_%'");
     for (const { datname } of rows) {
-      if (datname === TEMPLATE && !includeTemplate) continue;
-      await client.query(`DROP DATABASE IF EXISTS "${datname}" WITH (FORCE)`);
+      const pid = Number(/^patchcast_test_(\d+)_/.exec(datname)?.[1]);
+      if (datname.startsWith(RUN_PREFIX) || !pid || !isAlive(pid)) await client.query(`DROP DATABASE IF EXISTS "${datname}" WITH (FORCE)`);
     }
   } finally {
     await client.end();
@@ -38,7 +51,7 @@ async function main(): Promise<number> {
   const serverUrl = new URL(process.env.DATABASE_URL ?? cluster!.adminUrl('postgres'));
   const urlFor = (db: string): string => Object.assign(new URL(serverUrl), { pathname: `/${db}` }).toString();
 
-  await dropTestDatabases(urlFor('postgres'), true);
+  await dropTestDatabases(urlFor('postgres'));
   await prepareDatabase(urlFor(TEMPLATE), { seed: false });
   ensureDebianPackages(testPackages, 'the test suite');
   // API-only work can skip the bundle: PATCHCAST_SKIP_WEB_BUILD=1 npm test -- --selectProjects api
@@ -52,10 +65,11 @@ async function main(): Promise<number> {
       NODE_ENV: 'test',
       PATCHCAST_TEST_SERVER_URL: urlFor('postgres'),
       PATCHCAST_TEST_TEMPLATE: TEMPLATE,
+      PATCHCAST_TEST_PREFIX: RUN_PREFIX,
     },
   });
 
-  await dropTestDatabases(urlFor('postgres'), true);
+  await dropTestDatabases(urlFor('postgres'));
   cluster?.stop();
   return jest.status ?? 1;
 }

@@ -8,6 +8,7 @@ import { hashPassword } from '../services/accounts';
 import { createStudyArea, studyAreaAccess } from '../services/study-areas';
 import { setStartCoverByProportions } from '../services/start-cover';
 import { teamAccess } from '../services/teams';
+import { seedDemoScenarios } from './demo-scenarios';
 import { DEFAULT_STATE_COLOURS, type CoverState, type Role } from '../../shared/schemas';
 
 export const DEMO_PASSWORD = 'juniper-wash-demo';
@@ -72,4 +73,5 @@ export async function seedDemo(sequelize: Sequelize): Promise<void> {
     });
   }
   for (const area of demoAreas) await seedStudyArea(sequelize, team, users[0], area);
+  await seedDemoScenarios(sequelize);
 }

@@ -18,6 +18,7 @@ import {
 } from '../../shared/schemas';
 import type { TeamAccess } from './teams';
 import { bytesOf } from './stored-grid';
+import { recordAudit } from './audit';
 
 export type UploadedFile = { originalname: string; buffer: Buffer };
 
@@ -155,9 +156,12 @@ export async function renameStudyArea(access: StudyAreaAccess, body: { name?: st
   return studyAreaDetail(access);
 }
 
-export async function deleteStudyArea(access: StudyAreaAccess): Promise<void> {
+export async function deleteStudyArea(ctx: Pick<AppContext, 'sequelize'>, access: StudyAreaAccess, actor: User): Promise<void> {
   if (access.role !== 'owner') throw forbidden('Only owners can delete a study area.');
-  await access.studyArea.destroy();
+  await ctx.sequelize.transaction(async (transaction) => {
+    await access.studyArea.destroy({ transaction });
+    await recordAudit(access.studyArea.teamId, actor, 'study_area.deleted', `deleted the study area "${access.studyArea.name}"`, transaction);
+  });
 }
 
 export async function replaceStates(ctx: AppContext, access: StudyAreaAccess, states: CoverState[]): Promise<CoverState[]> {

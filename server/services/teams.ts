@@ -6,6 +6,7 @@ import type { AppContext } from '../context';
 import { AppError, forbidden, notFound } from '../http/errors';
 import { HOUR_MS, hashToken, newLinkToken } from './tokens';
 import { invitationMail } from '../mail/templates';
+import { recordAudit } from './audit';
 import type {
   Invitation as InvitationView,
   InvitationPreview,
@@ -77,8 +78,10 @@ export async function teamDetail(access: TeamAccess): Promise<TeamDetail> {
   return { team: summary(team, membership.role), members: members.map(memberView), invitations: invitations.map(invitationView) };
 }
 
-export async function renameTeam(access: TeamAccess, name: string): Promise<TeamSummary> {
+export async function renameTeam(access: TeamAccess, actor: User, name: string): Promise<TeamSummary> {
+  const before = access.team.name;
   await access.team.update({ name });
+  if (before !== name) await recordAudit(access.team.id, actor, 'team.renamed', `renamed the team from "${before}" to "${name}"`);
   return summary(access.team, access.membership.role);
 }
 
@@ -98,13 +101,16 @@ export async function invite(ctx: AppContext, access: TeamAccess, inviter: User,
     expiresAt: new Date(Date.now() + INVITATION_TTL_MS),
   });
   invitation.inviter = inviter;
+  await recordAudit(access.team.id, inviter, 'invitation.sent', `invited ${body.email} as ${body.role}`);
   await ctx.mailer.send(invitationMail(ctx.config.appUrl, body.email, access.team.name, inviter.name, body.role, token));
   return invitationView(invitation);
 }
 
-export async function cancelInvitation(access: TeamAccess, invitationId: number): Promise<void> {
-  const removed = await Invitation.destroy({ where: { id: invitationId, teamId: access.team.id, acceptedAt: null } });
-  if (removed === 0) throw notFound('Invitation');
+export async function cancelInvitation(access: TeamAccess, actor: User, invitationId: number): Promise<void> {
+  const invitation = await Invitation.findOne({ where: { id: invitationId, teamId: access.team.id, acceptedAt: null } });
+  if (!invitation) throw notFound('Invitation');
+  await invitation.destroy();
+  await recordAudit(access.team.id, actor, 'invitation.cancelled', `cancelled the invitation of ${invitation.email}`);
 }
 
 async function ownerCount(teamId: number, transaction: Transaction): Promise<number> {
@@ -116,7 +122,7 @@ async function ownerCount(teamId: number, transaction: Transaction): Promise<num
 const lastOwner = (): AppError =>
   new AppError(409, 'last_owner', 'A team needs at least one owner: make another member owner first.');
 
-export async function changeMember(ctx: AppContext, access: TeamAccess, userId: number, body: MemberChangeBody): Promise<Member> {
+export async function changeMember(ctx: AppContext, access: TeamAccess, actor: User, userId: number, body: MemberChangeBody): Promise<Member> {
   const isSelf = userId === access.membership.userId;
   if (body.role !== undefined && access.membership.role !== 'owner') throw forbidden('Only owners can change roles.');
   if (body.role === undefined && !isSelf && access.membership.role !== 'owner') {
@@ -132,19 +138,25 @@ export async function changeMember(ctx: AppContext, access: TeamAccess, userId: 
     if (body.role && member.role === 'owner' && body.role !== 'owner' && (await ownerCount(access.team.id, transaction)) <= 1) {
       throw lastOwner();
     }
+    const before = member.role;
     await member.update({ ...(body.role ? { role: body.role } : {}), ...(body.notifyRuns === undefined ? {} : { notifyRuns: body.notifyRuns }) }, { transaction });
+    if (body.role && body.role !== before) {
+      await recordAudit(access.team.id, actor, 'member.role_changed', `changed ${member.user?.name ?? 'a member'} from ${before} to ${body.role}`, transaction);
+    }
     return memberView(member);
   });
 }
 
-export async function removeMember(ctx: AppContext, access: TeamAccess, userId: number): Promise<void> {
+export async function removeMember(ctx: AppContext, access: TeamAccess, actor: User, userId: number): Promise<void> {
   const isSelf = userId === access.membership.userId;
   if (!isSelf && access.membership.role !== 'owner') throw forbidden('Only owners can remove other members.');
   await ctx.sequelize.transaction(async (transaction) => {
-    const member = await Membership.findOne({ where: { teamId: access.team.id, userId }, transaction });
+    const member = await Membership.findOne({ where: { teamId: access.team.id, userId }, include: [{ model: User, as: 'user' }], transaction });
     if (!member) throw notFound('Member');
     if (member.role === 'owner' && (await ownerCount(access.team.id, transaction)) <= 1) throw lastOwner();
     await member.destroy({ transaction });
+    if (isSelf) await recordAudit(access.team.id, actor, 'member.left', `left the team (was ${member.role})`, transaction);
+    else await recordAudit(access.team.id, actor, 'member.removed', `removed ${member.user?.name ?? 'a member'} (${member.role})`, transaction);
   });
 }
 
@@ -188,6 +200,7 @@ export async function acceptInvitation(ctx: AppContext, user: User, token: strin
     const existing = await Membership.findOne({ where: { teamId: invitation.teamId, userId: user.id }, transaction });
     const role = existing?.role ?? invitation.role;
     if (!existing) await Membership.create({ teamId: invitation.teamId, userId: user.id, role }, { transaction });
+    await recordAudit(invitation.teamId, user, 'invitation.accepted', `joined as ${role} (invited by ${invitation.inviter?.name ?? 'a former member'})`, transaction);
     if (!invitation.team) throw new Error('invitation loaded without its team');
     return summary(invitation.team, role);
   });

@@ -4,3 +4,6 @@ export * from './team';
 export * from './admin';
 export * from './outbox';
 export * from './study-area';
+export * from './scenario';
+export * from './survey';
+export * from './audit';

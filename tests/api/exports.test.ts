@@ -4,7 +4,7 @@ import { execFileSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import GJV from 'geojson-validation';
+import * as GJV from 'geojson-validation';
 import { client, type Client } from '../support/client';
 import { makeTeam, makeUser, PASSWORD } from '../support/people';
 import { startTestApp, type TestApp } from '../support/test-app';

@@ -46,6 +46,7 @@ const ownersOnly = (ok: number): Record<Caller, number> => ({ owner: ok, editor:
 
 const calls: Call[] = [
   { name: 'GET /teams/:teamId', send: (c, tm) => c.get(`/api/v1/teams/${tm.id}`), expected: readers },
+  { name: 'GET /teams/:teamId/audit', send: (c, tm) => c.get(`/api/v1/teams/${tm.id}/audit`), expected: ownersOnly(200) },
   { name: 'PATCH /teams/:teamId', send: (c, tm) => c.patch(`/api/v1/teams/${tm.id}`, { name: 'Matrix Team' }), expected: ownersOnly(200) },
   {
     name: 'POST /teams/:teamId/invitations',

@@ -111,3 +111,22 @@ test('when a site admin disables an account, then its sessions end and it cannot
   expect((await p.get('/api/v1/admin/users')).status).toBe(401);
   expect((await (await signedIn((await makeUser('Not Admin')).email)).get('/api/v1/admin/users')).status).toBe(403);
 });
+
+test('when members are invited, promoted and removed, then the owner reads each event in the audit log, newest first', async () => {
+  const owner = await makeUser('Audit Owner');
+  const editor = await makeUser('Audit Editor');
+  const team = await makeTeam('Audited', [[owner, 'owner'], [editor, 'editor']]);
+  const c = await signedIn(owner.email);
+  await c.post(`/api/v1/teams/${team.id}/invitations`, { email: 'audit.invitee@example.org', role: 'viewer' });
+  await c.patch(`/api/v1/teams/${team.id}/members/${editor.id}`, { role: 'viewer' });
+  await c.delete(`/api/v1/teams/${team.id}/members/${editor.id}`);
+  await c.patch(`/api/v1/teams/${team.id}`, { name: 'Audited Team' });
+  const log = await c.get(`/api/v1/teams/${team.id}/audit`);
+  expect(log.status).toBe(200);
+  expect(log.body.events.map((e: { action: string; summary: string; actor: string }) => [e.action, e.summary, e.actor])).toEqual([
+    ['team.renamed', 'renamed the team from "Audited" to "Audited Team"', 'Audit Owner'],
+    ['member.removed', 'removed Audit Editor (viewer)', 'Audit Owner'],
+    ['member.role_changed', 'changed Audit Editor from editor to viewer', 'Audit Owner'],
+    ['invitation.sent', 'invited audit.invitee@example.org as viewer', 'Audit Owner'],
+  ]);
+});

@@ -24,7 +24,7 @@ async function admin<T>(fn: (client: pg.Client) => Promise<T>): Promise<T> {
 export type TestDatabase = { url: string; drop(): Promise<void> };
 
 export async function createTestDatabase(): Promise<TestDatabase> {
-  const name = `patchcast_test_${randomBytes(6).toString('hex')}`;
+  const name = `${process.env.PATCHCAST_TEST_PREFIX ?? 'patchcast_test_0_'}${randomBytes(6).toString('hex')}`;
   await admin((c) => c.query(`CREATE DATABASE "${name}" TEMPLATE "${process.env.PATCHCAST_TEST_TEMPLATE}"`));
   const url = Object.assign(serverUrl(), { pathname: `/${name}` }).toString();
   return { url, drop: () => admin((c) => c.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`)).then(() => undefined) };

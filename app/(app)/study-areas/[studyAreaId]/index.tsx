@@ -1,0 +1,3 @@
+import { StudyAreaDetailScreen } from '@/features/studyAreas/StudyAreaDetailScreen';
+
+export default StudyAreaDetailScreen;

@@ -1,0 +1,3 @@
+import { ScenarioEditorScreen } from '@/features/scenarios/ScenarioEditorScreen';
+
+export default ScenarioEditorScreen;

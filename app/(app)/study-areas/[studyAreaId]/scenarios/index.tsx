@@ -1,0 +1,3 @@
+import { ScenarioListScreen } from '@/features/scenarios/ScenarioListScreen';
+
+export default ScenarioListScreen;

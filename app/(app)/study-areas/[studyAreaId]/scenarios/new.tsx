@@ -1,0 +1,3 @@
+import { NewScenarioScreen } from '@/features/scenarios/NewScenarioScreen';
+
+export default NewScenarioScreen;

@@ -1,0 +1,3 @@
+import { SurveyScreen } from '@/features/surveys/SurveyScreen';
+
+export default SurveyScreen;

@@ -1,0 +1,3 @@
+import { SurveyListScreen } from '@/features/surveys/SurveyListScreen';
+
+export default SurveyListScreen;

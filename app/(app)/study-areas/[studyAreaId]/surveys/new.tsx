@@ -1,0 +1,3 @@
+import { NewSurveyScreen } from '@/features/surveys/NewSurveyScreen';
+
+export default NewSurveyScreen;

@@ -1,0 +1,3 @@
+import { CreateStudyAreaScreen } from '@/features/studyAreas/CreateStudyAreaScreen';
+
+export default CreateStudyAreaScreen;

@@ -1,0 +1,11 @@
+/** The parts of a study area's page; `path` is relative to /study-areas/:id, null while not built yet. */
+export type StudyAreaSection = { key: string; label: string; path: string | null };
+
+export const STUDY_AREA_SECTIONS: ReadonlyArray<StudyAreaSection> = [
+  { key: 'overview', label: 'Overview', path: '' },
+  { key: 'scenarios', label: 'Scenarios', path: '/scenarios' },
+  { key: 'surveys', label: 'Surveys', path: '/surveys' },
+  { key: 'runs', label: 'Runs', path: null },
+  { key: 'map', label: 'Map', path: null },
+  { key: 'compare', label: 'Compare', path: null },
+];
