@@ -1,9 +1,10 @@
-import { useCallback, useRef, type ReactElement } from 'react';
+import { useCallback, useRef, useState, type ReactElement } from 'react';
 import { StyleSheet, TextInput } from 'react-native';
 
 import { colors, fonts, radius, typeScale } from '@/components/theme';
 
 import { useBlockPaste } from './useBlockPaste';
+import { shortForm } from './cellDisplay';
 
 export type MatrixCellProps = {
   /** Accessible name, e.g. "From Shrub steppe to Bare soil". */
@@ -17,6 +18,7 @@ export type MatrixCellProps = {
 };
 
 export const CELL_WIDTH = 80;
+
 export const CELL_HEIGHT = 44;
 
 /** One transition probability: a 44 px numeric input in IBM Plex Mono, marked when it is wrong. */
@@ -24,10 +26,13 @@ export function MatrixCell({ label, text, issue, readOnly, onChange, onPasteBloc
   const input = useRef<TextInput>(null);
   const paste = useCallback((block: string) => onPasteBlock(block), [onPasteBlock]);
   useBlockPaste(input, paste);
+  const [focused, setFocused] = useState(false);
   return (
     <TextInput
       ref={input}
-      value={text}
+      value={focused ? text : shortForm(text)}
+      onFocus={() => setFocused(true)}
+      onBlur={() => setFocused(false)}
       onChangeText={onChange}
       editable={!readOnly}
       accessibilityLabel={label}
