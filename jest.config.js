@@ -34,11 +34,14 @@ module.exports = {
       ...common,
       displayName: 'api',
       testMatch: ['<rootDir>/tests/api/**/*.test.ts'],
+      // Set-up seeds databases and runs simulations: slower than a unit test on a loaded 2-core machine.
+      setupFilesAfterEnv: ['<rootDir>/tests/support/slow-timeout.ts'],
     },
     {
       ...common,
       displayName: 'e2e',
       testMatch: ['<rootDir>/tests/e2e/**/*.test.ts'],
+      setupFilesAfterEnv: ['<rootDir>/tests/support/slow-timeout.ts'],
     },
   ],
 };

@@ -21,6 +21,9 @@ import { invitationRoutes } from './routes/invitations';
 import { adminRoutes } from './routes/admin';
 import { devRoutes } from './routes/dev';
 import { studyAreaRoutes, teamStudyAreaRoutes } from './routes/study-areas';
+import { runRoutes, scenarioRunRoutes, studyAreaRunRoutes } from './routes/runs';
+import { noticeRoutes } from './routes/notices';
+import { createRunQueue } from './jobs/run-queue';
 import { scenarioRoutes, studyAreaScenarioRoutes } from './routes/scenarios';
 import { studyAreaSurveyRoutes, surveyRoutes } from './routes/surveys';
 
@@ -37,6 +40,7 @@ export function createApp(ctx: AppContext): App {
   const pool = new pg.Pool({ connectionString: config.databaseUrl, max: 5 });
   const auth = configurePassport();
   const limits = createRateLimits();
+  const runQueue = createRunQueue(config.databaseUrl, logger);
 
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -72,6 +76,10 @@ export function createApp(ctx: AppContext): App {
   api.use('/study-areas', requireSignIn, studyAreaRoutes(ctx));
   api.use('/scenarios', requireSignIn, scenarioRoutes(ctx));
   api.use('/surveys', requireSignIn, surveyRoutes());
+  api.use('/scenarios/:scenarioId/runs', requireSignIn, scenarioRunRoutes(ctx, runQueue));
+  api.use('/study-areas/:studyAreaId/runs', requireSignIn, studyAreaRunRoutes());
+  api.use('/runs', requireSignIn, runRoutes(ctx, runQueue));
+  api.use('/notices', requireSignIn, noticeRoutes());
   api.use('/admin', requireSignIn, adminRoutes(ctx));
   if (config.outboxEnabled) api.use('/dev', requireSignIn, devRoutes(ctx));
   api.use(apiNotFound);
@@ -85,5 +93,11 @@ export function createApp(ctx: AppContext): App {
   }
   app.use(errorHandler(logger));
 
-  return { app, close: () => pool.end() };
+  return {
+    app,
+    close: async () => {
+      await runQueue.stop();
+      await pool.end();
+    },
+  };
 }

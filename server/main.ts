@@ -4,6 +4,7 @@ import { connectDatabase } from './db';
 import { createLogger } from './logger';
 import { createMailer } from './mail/mailer';
 import { createApp } from './app';
+import { startRunWorker } from './jobs/worker';
 
 export async function startServer(): Promise<() => Promise<void>> {
   const config = loadConfig();
@@ -15,7 +16,10 @@ export async function startServer(): Promise<() => Promise<void>> {
     const s = app.listen(config.port, () => resolve(s));
   });
   logger.info({ port: config.port }, 'Patchcast server listening');
+  // The embedded run worker (PATCHCAST_EMBEDDED_WORKER=0 leaves runs to `npm run worker` processes).
+  const worker = process.env.PATCHCAST_EMBEDDED_WORKER === '0' ? null : await startRunWorker({ config, mailer, logger });
   return async () => {
+    await worker?.stop();
     await new Promise<void>((resolve) => server.close(() => resolve()));
     await close();
     await sequelize.close();

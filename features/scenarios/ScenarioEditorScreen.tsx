@@ -4,11 +4,13 @@ import { Banner } from '@/components/Banner';
 import { Heading } from '@/components/Heading';
 import { LoadingState } from '@/components/LoadingState';
 import { Screen } from '@/components/Screen';
+import { Section } from '@/components/Section';
 import { Text } from '@/components/Text';
 import { TextLink } from '@/components/TextLink';
 import type { ScenarioDetail, StudyAreaDetail } from '@/shared/schemas';
 import { QueryErrorState } from '@/features/api/QueryErrorState';
 import { canEdit } from '@/features/studyAreas/roles';
+import { StartRunForm } from '@/features/runs/StartRunForm';
 import { formatDateTime } from '@/features/ui/formatDate';
 
 import { formFromScenario } from './editor/scenarioFormState';
@@ -51,6 +53,12 @@ function ScenarioEditorBody({ studyArea, scenario, context }: ScenarioEditorBody
         uncertainty={uncertainty.data}
         save={{ label: 'Save', busy: save.isPending, error: save.error, run: (body) => save.mutate(body) }}
       />
+      {readOnly || !scenario.fitsStudyArea ? null : (
+        <Section title="Run this scenario" description="Simulate every patch over many seeded replicates as a background job; the saved scenario is frozen into the run.">
+          <StartRunForm scenario={scenario} />
+        </Section>
+      )}
+      <TextLink href={`/study-areas/${studyArea.id}/runs`}>Runs of this study area →</TextLink>
     </>
   );
 }

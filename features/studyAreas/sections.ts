@@ -5,7 +5,7 @@ export const STUDY_AREA_SECTIONS: ReadonlyArray<StudyAreaSection> = [
   { key: 'overview', label: 'Overview', path: '' },
   { key: 'scenarios', label: 'Scenarios', path: '/scenarios' },
   { key: 'surveys', label: 'Surveys', path: '/surveys' },
-  { key: 'runs', label: 'Runs', path: null },
+  { key: 'runs', label: 'Runs', path: '/runs' },
   { key: 'map', label: 'Map', path: null },
   { key: 'compare', label: 'Compare', path: null },
 ];

@@ -13,9 +13,15 @@ import { Scenario, initScenario } from './scenario';
 import { ScenarioPhaseRow, initScenarioPhase } from './scenario-phase';
 import { Survey, initSurvey } from './survey';
 import { SurveyFile, initSurveyFile } from './survey-file';
+import { Run, initRun } from './run';
+import { RunInput, initRunInput } from './run-input';
+import { RunResultRow, initRunResult } from './run-result';
+import { RunFrame, initRunFrame } from './run-frame';
+import { Notice, initNotice } from './notice';
 
 export { AuditEvent, User, Team, Membership, Invitation, AccountToken, StudyArea, CoverStateRow, StartCover };
 export { Scenario, ScenarioPhaseRow, Survey, SurveyFile };
+export { Run, RunInput, RunResultRow, RunFrame, Notice };
 
 export function initModels(sequelize: Sequelize): void {
   initUser(sequelize);
@@ -43,4 +49,10 @@ export function initModels(sequelize: Sequelize): void {
   ScenarioPhaseRow.belongsTo(Survey, { foreignKey: 'surveyId', as: 'survey' });
   Survey.hasMany(SurveyFile, { foreignKey: 'surveyId', as: 'files' });
   Survey.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  initRun(sequelize);
+  initRunInput(sequelize);
+  initRunResult(sequelize);
+  initRunFrame(sequelize);
+  initNotice(sequelize);
+  Run.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
 }

@@ -9,6 +9,7 @@ import { createStudyArea, studyAreaAccess } from '../services/study-areas';
 import { setStartCoverByProportions } from '../services/start-cover';
 import { teamAccess } from '../services/teams';
 import { seedDemoScenarios } from './demo-scenarios';
+import { seedDemoRuns } from './demo-runs';
 import { DEFAULT_STATE_COLOURS, type CoverState, type Role } from '../../shared/schemas';
 
 export const DEMO_PASSWORD = 'juniper-wash-demo';
@@ -74,4 +75,5 @@ export async function seedDemo(sequelize: Sequelize): Promise<void> {
   }
   for (const area of demoAreas) await seedStudyArea(sequelize, team, users[0], area);
   await seedDemoScenarios(sequelize);
+  await seedDemoRuns(sequelize);
 }

@@ -5,6 +5,7 @@ import type { Boundary, PatchGrid } from '../../shared/geo';
 
 // Copies into aligned buffers: a Buffer from the pool may start at an offset typed arrays refuse.
 export const float32s = (bytes: Buffer): Float32Array => new Float32Array(new Uint8Array(bytes).buffer);
+export const uint8s = (bytes: Buffer): Uint8Array => new Uint8Array(bytes);
 export const int32s = (bytes: Buffer): Int32Array => new Int32Array(new Uint8Array(bytes).buffer);
 export const bytesOf = (array: ArrayBufferView): Buffer => Buffer.from(array.buffer, array.byteOffset, array.byteLength);
 

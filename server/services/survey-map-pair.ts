@@ -1,6 +1,5 @@
 // Two dated cover maps as a survey: each patch's state on each map is the state of the polygon
 // under its centroid (shared/cover assignFromCoverMap), and the pairs are counted per patch.
-import { StudyArea } from '../models';
 import { AppError } from '../http/errors';
 import { assignFromCoverMap, UNASSIGNED } from '../../shared/cover/cover-map';
 import { countMapPairs, type TransitionCounts } from '../../shared/markov';
@@ -9,14 +8,11 @@ import type { CoverState } from '../../shared/schemas';
 import type { UploadedFile } from './study-areas';
 import { requireAllMapped, type LabelMap } from './state-mapping';
 import { approx } from './chain-readings';
+import { loadStoredGrid } from './stored-grid';
 
 export type MapPairCounts = { counts: TransitionCounts; unmatched: { earlier: number; later: number }; readings: string[] };
 
 export type DatedMap = { file: UploadedFile; date: string; role: 'earlier' | 'later' };
-
-// Copies into aligned buffers: a Buffer from the pool may start at an odd offset.
-const float32s = (bytes: Buffer): Float32Array => new Float32Array(new Uint8Array(bytes).buffer);
-const int32s = (bytes: Buffer): Int32Array => new Int32Array(new Uint8Array(bytes).buffer);
 
 async function mapFeatures(map: DatedMap, property: string, labels: LabelMap): Promise<PolygonFeature[]> {
   const { features } = await readPolygonFeatures(new Uint8Array(map.file.buffer), map.file.originalname);
@@ -36,14 +32,13 @@ const years = (from: string, to: string): number => (Date.parse(to) - Date.parse
 
 /** Paired patch states from the two maps, counted (shared/markov countMapPairs). */
 export async function countMapPair(studyAreaId: number, maps: [DatedMap, DatedMap], property: string, labels: LabelMap, states: readonly CoverState[]): Promise<MapPairCounts> {
-  const row = await StudyArea.scope('withGrid').findByPk(studyAreaId);
-  const grid = { spec: row!.gridSpec, cells: int32s(row!.patchCells), areas: float32s(row!.patchAreas), totalAreaM2: row!.totalAreaM2 };
+  const { grid, boundary } = await loadStoredGrid(studyAreaId);
   const names = states.map((s) => s.name);
   const [before, after] = await Promise.all(
     maps.map(async (map) => {
       const features = await mapFeatures(map, property, labels);
       const stateOf = (f: PolygonFeature): number | null => labels.get(String(f.properties[property] ?? '')) ?? null;
-      const { states: assigned, unmatchedCount } = assignFromCoverMap(grid, row!.boundary, features, stateOf, null);
+      const { states: assigned, unmatchedCount } = assignFromCoverMap(grid, boundary, features, stateOf, null);
       return { states: [...assigned].map((s) => (s === UNASSIGNED ? null : names[s])), unmatchedCount };
     }),
   );

@@ -6,4 +6,5 @@ export * from './outbox';
 export * from './study-area';
 export * from './scenario';
 export * from './survey';
+export * from './run';
 export * from './audit';

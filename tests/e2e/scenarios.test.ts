@@ -111,7 +111,12 @@ test('when the editor pastes a block into a second phase, then a bad row is refu
     await second.getByText(/phase 2: .*sums to 0\.9/i).first().waitFor();
 
     await second.getByRole('button', { name: 'Normalise rows' }).click();
-    expect(await entry(second, 'Bare soil', 'Bare soil').inputValue()).toBe(String(0.4 / 0.9));
+    // Shown to 4 decimals while not edited; the full value is kept and appears on focus.
+    const normalised = entry(second, 'Bare soil', 'Bare soil');
+    expect(await normalised.inputValue()).toBe('0.4444…');
+    await normalised.focus();
+    expect(await normalised.inputValue()).toBe(String(0.4 / 0.9));
+    await normalised.blur();
     await page.getByRole('button', { name: 'Save', exact: true }).click();
     await page.getByText('Phase 2, from step 3 on').waitFor();
     await page.getByText('For the saved scenario, computed on the server.').waitFor();

@@ -1,0 +1,3 @@
+import { RunScreen } from '@/features/runs/RunScreen';
+
+export default RunScreen;

@@ -1,0 +1,3 @@
+import { RunListScreen } from '@/features/runs/RunListScreen';
+
+export default RunListScreen;

@@ -1,0 +1,62 @@
+import { Router, type Request } from 'express';
+import type { AppContext } from '../context';
+import { parseInput } from '../http/validate';
+import { currentUser } from '../http/require-user';
+import type { RunQueue } from '../jobs/run-queue';
+import * as runs from '../services/runs';
+import { runFrame, runSummary } from '../services/runs-results';
+import { idParamSchema, startRunBodySchema, stepParamSchema, type Role } from '../../shared/schemas';
+
+const EDITORS: readonly Role[] = ['owner', 'editor'];
+
+const runOf = (req: Request, allowed?: readonly Role[]): Promise<runs.RunAccess> =>
+  runs.runAccess(parseInput(idParamSchema, req.params.runId, 'path'), currentUser(req), allowed);
+
+/** Mounted at /scenarios/:scenarioId/runs. */
+export function scenarioRunRoutes(ctx: AppContext, queue: RunQueue): Router {
+  const router = Router({ mergeParams: true });
+  router.post('/', async (req: Request, res) => {
+    const scenarioId = parseInput(idParamSchema, req.params.scenarioId, 'path');
+    const body = parseInput(startRunBodySchema, req.body, 'body');
+    res.status(201).json({ run: await runs.startRun(ctx, queue, currentUser(req), scenarioId, body) });
+  });
+  return router;
+}
+
+/** Mounted at /study-areas/:studyAreaId/runs. */
+export function studyAreaRunRoutes(): Router {
+  const router = Router({ mergeParams: true });
+  router.get('/', async (req: Request, res) => {
+    res.json({ runs: await runs.listRuns(parseInput(idParamSchema, req.params.studyAreaId, 'path'), currentUser(req)) });
+  });
+  return router;
+}
+
+/** Mounted at /runs. */
+export function runRoutes(ctx: AppContext, queue: RunQueue): Router {
+  const router = Router();
+
+  router.get('/:runId', async (req, res) => {
+    res.json({ run: await runs.runDetail(await runOf(req)) });
+  });
+
+  router.post('/:runId/cancel', async (req, res) => {
+    res.json({ run: await runs.cancelRun(await runOf(req, EDITORS)) });
+  });
+
+  router.post('/:runId/retry', async (req, res) => {
+    res.json({ run: await runs.retryRun(ctx, queue, await runOf(req, EDITORS)) });
+  });
+
+  router.get('/:runId/summary', async (req, res) => {
+    res.json(await runSummary(await runOf(req)));
+  });
+
+  router.get('/:runId/frames/:step', async (req, res) => {
+    const access = await runOf(req);
+    const bytes = await runFrame(access, parseInput(stepParamSchema, req.params.step, 'path'));
+    res.type('application/octet-stream').set('cache-control', 'private, max-age=86400, immutable').send(bytes);
+  });
+
+  return router;
+}
