@@ -7,6 +7,9 @@ import { mergeShards, runTasks, type RunResult, type RunSpec } from '../../share
 export type ShardWorkerData = { spec: RunSpec; history: SharedArrayBuffer | null };
 export type ShardTaskMessage = { replicate: number; start: number; end: number };
 
+/** Started workers for one spec, reusable for several runs of it (a benchmark times only run()). */
+export type ShardPool = { run: () => Promise<RunResult>; close: () => Promise<void> };
+
 const workerFile = require.resolve('./shardWorker');
 
 /** A worker on shardWorker; from TypeScript sources (tsx, jest) it first registers tsx's require hook. */
@@ -16,41 +19,60 @@ function startWorker(workerData: ShardWorkerData): Worker {
   return new Worker(source, { eval: true, workerData, execArgv: [] });
 }
 
+/** Sends one task to a worker and waits for its result (or its failure). */
+function runTask(worker: Worker, task: ShardTaskMessage): Promise<ShardResult> {
+  return new Promise((resolve, reject) => {
+    const settle = (): void => {
+      worker.off('message', onResult);
+      worker.off('error', reject);
+      worker.off('exit', onExit);
+    };
+    const onResult = (result: ShardResult): void => {
+      settle();
+      resolve(result);
+    };
+    const onExit = (code: number): void => {
+      settle();
+      reject(new Error(`shard worker exited with code ${code}`));
+    };
+    worker.on('message', onResult);
+    worker.once('error', reject);
+    worker.once('exit', onExit);
+    worker.postMessage(task);
+  });
+}
+
 /**
- * Runs every shard of the run on `workers` threads (shards per replicate = workers; a free worker
- * takes the next task). History, when kept, is written by the workers straight into one
- * SharedArrayBuffer.
+ * Starts `workers` threads for the spec (shards per replicate = workers). Each run() hands the next
+ * task to whichever worker is free; history, when kept, is written by the workers straight into one
+ * SharedArrayBuffer, so run() only moves counts and totals.
  */
-export async function simulateRunParallel(spec: RunSpec, workers: number): Promise<RunResult> {
+export function startShardPool(spec: RunSpec, workers: number): ShardPool {
   const history = spec.historyReplicate === null ? null : new SharedArrayBuffer((spec.steps + 1) * spec.patchCount);
-  const queue = runTasks(spec, workers);
-  const results: ShardResult[] = [];
-  const data: ShardWorkerData = { spec, history };
-  const threads = Array.from({ length: Math.min(workers, queue.length) }, () => startWorker(data));
-  try {
+  const tasksPerRun = runTasks(spec, workers).length;
+  const threads = Array.from({ length: Math.min(workers, tasksPerRun) }, () => startWorker({ spec, history }));
+  const run = async (): Promise<RunResult> => {
+    const queue = runTasks(spec, workers);
+    const results: ShardResult[] = [];
     await Promise.all(
-      threads.map(
-        (worker) =>
-          new Promise<void>((resolve, reject) => {
-            const next = (): void => {
-              const task = queue.shift();
-              worker.postMessage(task ?? null);
-              if (!task) resolve();
-            };
-            worker.on('message', (result: ShardResult) => {
-              results.push(result);
-              next();
-            });
-            worker.on('error', reject);
-            worker.on('exit', (code) => {
-              if (code !== 0) reject(new Error(`shard worker exited with code ${code}`));
-            });
-            next();
-          }),
-      ),
+      threads.map(async (worker) => {
+        for (let task = queue.shift(); task; task = queue.shift()) results.push(await runTask(worker, task));
+      }),
     );
-  } finally {
+    return mergeShards(spec, results, history ? new Uint8Array(history) : null);
+  };
+  const close = async (): Promise<void> => {
     await Promise.all(threads.map((worker) => worker.terminate()));
+  };
+  return { run, close };
+}
+
+/** One run on `workers` threads, started and stopped around it. */
+export async function simulateRunParallel(spec: RunSpec, workers: number): Promise<RunResult> {
+  const pool = startShardPool(spec, workers);
+  try {
+    return await pool.run();
+  } finally {
+    await pool.close();
   }
-  return mergeShards(spec, results, history ? new Uint8Array(history) : null);
 }

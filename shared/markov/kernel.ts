@@ -70,72 +70,126 @@ export function planShards(patchCount: number, count: number): [number, number][
   return out;
 }
 
-/** Where one block sits in the shard's buffers (see simulateShard). */
+/** Interleaved count histograms (lane = patch index mod LANES), so that runs of one state do not queue on one counter. */
+const LANES = 4;
+/** log2 of the entries per histogram lane: 16 > MAX_STATES (12). */
+const LANE_BITS = 4;
+const LANE = 1 << LANE_BITS;
+
+/** The shard-wide inputs of every block (see simulateShard). */
+type ShardPlan = {
+  k: number;
+  slots: number;
+  buffer: Uint8Array;
+  stride: number;
+  origin: number;
+  table: Uint8Array;
+  thresholds: Float64Array;
+  rowBase: Int32Array;
+  areas: Float64Array | Float32Array;
+  blockCounts: Float64Array;
+  areaByBlock: Float64Array;
+  /** LANES × LANE counters, reused by every step. */
+  tally: Int32Array;
+};
+
+/** One block: patches [lo, hi) of the shard, its totals from areaBase, steps first…slots − 1 drawn. */
 type BlockPlace = {
   lo: number;
   hi: number;
   first: number;
-  slots: number;
-  stride: number;
-  origin: number;
-  k: number;
   areaBase: number;
   /** false when every patch of the block has the same area: totals are then area × count. */
   weighted: boolean;
 };
 
+/** Exact search for a draw whose bin straddles a threshold: the first j from the bin's candidate with r < T_j (sampler.ts). */
+function straddleDraw(thresholds: Float64Array, at: number, j: number, u: number): number {
+  while (u >= thresholds[at + j]) j++;
+  return j;
+}
+
 /**
- * The hot loop: steps `first`…slots − 1 of one block with its own stream. Kept in its own small
- * function with everything in locals so that V8 compiles it tightly.
+ * The hot loop: one step of `count` patches, states read at `from` and written at `to`, with the
+ * block's xoshiro128** state s0…s3 carried in `stream`. Counts go to lane (i mod LANES) of `tally`;
+ * a weighted block adds each area to sums[sumAt + state] in patch order, so that the doubles do
+ * not depend on the split. Locals only: no property loads, closures or Math calls besides imul.
  */
-function runBlock(
-  seed: Uint32Array,
-  place: BlockPlace,
+function drawStep(
+  stream: Int32Array,
   buffer: Uint8Array,
+  from: number,
+  to: number,
+  count: number,
   table: Uint8Array,
   thresholds: Float64Array,
-  rowBase: Int32Array,
-  blockCounts: Float64Array,
-  areaByBlock: Float64Array,
+  rowBase: number,
+  k: number,
+  tally: Int32Array,
+  weighted: boolean,
   areas: Float64Array | Float32Array,
+  areaAt: number,
+  sums: Float64Array,
+  sumAt: number,
 ): void {
-  const { lo, hi, first, slots, stride, origin, k, areaBase, weighted } = place;
   const bits = TABLE_BITS;
   const shift = 32 - TABLE_BITS;
   const fallback = FALLBACK;
-  let s0 = seed[0] | 0;
-  let s1 = seed[1] | 0;
-  let s2 = seed[2] | 0;
-  let s3 = seed[3] | 0;
-  for (let s = first; s < slots; s++) {
-    const from = origin + (s === 0 ? 0 : (s - 1) * stride);
-    const to = origin + s * stride;
-    const base = rowBase[s];
-    const sumBase = areaBase + s * k;
-    for (let i = lo; i < hi; i++) {
-      // xoshiro128** step, inlined from streams.ts (Xoshiro128.nextUint32).
-      const m = Math.imul(s1, 5);
-      const r = Math.imul((m << 7) | (m >>> 25), 9);
-      const t = s1 << 9;
-      s2 ^= s0;
-      s3 ^= s1;
-      s1 ^= s2;
-      s0 ^= s3;
-      s2 ^= t;
-      s3 = (s3 << 11) | (s3 >>> 21);
-      // Lookup-table draw, inlined from sampler.ts (lookupDraw).
-      const row = base + buffer[from + i];
-      let j = table[(row << bits) | (r >>> shift)];
-      if (j >= fallback) {
-        j -= fallback;
-        const tb = row * k;
-        const u = r >>> 0;
-        while (u >= thresholds[tb + j]) j++;
-      }
-      buffer[to + i] = j;
-      blockCounts[sumBase + j]++;
-      if (weighted) areaByBlock[sumBase + j] += areas[i];
-    }
+  let s0 = stream[0];
+  let s1 = stream[1];
+  let s2 = stream[2];
+  let s3 = stream[3];
+  for (let i = 0; i < count; i++) {
+    // xoshiro128** step, inlined from streams.ts (Xoshiro128.nextUint32).
+    const m = Math.imul(s1, 5);
+    const r = Math.imul((m << 7) | (m >>> 25), 9);
+    const t = s1 << 9;
+    s2 ^= s0;
+    s3 ^= s1;
+    s1 ^= s2;
+    s0 ^= s3;
+    s2 ^= t;
+    s3 = (s3 << 11) | (s3 >>> 21);
+    // Lookup-table draw, inlined from sampler.ts (lookupDraw).
+    const row = rowBase + buffer[from + i];
+    let j = table[(row << bits) | (r >>> shift)];
+    if (j >= fallback) j = straddleDraw(thresholds, row * k, j - fallback, r >>> 0);
+    buffer[to + i] = j;
+    tally[((i & (LANES - 1)) << LANE_BITS) | j]++;
+    if (weighted) sums[sumAt + j] += areas[areaAt + i];
+  }
+  stream[0] = s0;
+  stream[1] = s1;
+  stream[2] = s2;
+  stream[3] = s3;
+}
+
+/** Moves the lane tallies of one step into into[base + state] and clears them. */
+function flushTally(tally: Int32Array, into: Float64Array, base: number, k: number): void {
+  for (let j = 0; j < k; j++) into[base + j] = tally[j] + tally[LANE + j] + tally[2 * LANE + j] + tally[3 * LANE + j];
+  tally.fill(0);
+}
+
+/** Step 0 of a block with given start states: the same tallies as drawStep, without draws. */
+function tallyGiven(plan: ShardPlan, place: BlockPlace): void {
+  const { buffer, origin, areas, blockCounts, areaByBlock } = plan;
+  for (let i = place.lo; i < place.hi; i++) {
+    blockCounts[place.areaBase + buffer[origin + i]]++;
+    if (place.weighted) areaByBlock[place.areaBase + buffer[origin + i]] += areas[i];
+  }
+}
+
+/** Steps first…slots − 1 of one block with its own stream. */
+function runBlock(plan: ShardPlan, place: BlockPlace, stream: Int32Array): void {
+  const { buffer, stride, table, thresholds, rowBase, k, tally, areas, blockCounts, areaByBlock } = plan;
+  const { lo, hi, weighted, areaBase } = place;
+  const start = plan.origin + lo;
+  if (place.first > 0) tallyGiven(plan, place);
+  for (let s = place.first; s < plan.slots; s++) {
+    const from = start + (s === 0 ? 0 : (s - 1) * stride);
+    const sumAt = areaBase + s * k;
+    drawStep(stream, buffer, from, start + s * stride, hi - lo, table, thresholds, rowBase[s], k, tally, weighted, areas, lo, areaByBlock, sumAt);
+    flushTally(tally, blockCounts, sumAt, k);
   }
 }
 
@@ -172,13 +226,21 @@ export function simulateShard(spec: KernelSpec, task: ShardTask, history?: Uint8
   for (let s = 1; s < slots; s++) rowBase[s] = phaseAt[s - 1] * k;
 
   const blockCount = Math.ceil((end - start) / BLOCK_SIZE);
-  const blockCounts = new Float64Array(blockCount * slots * k);
-  const areaByBlock = new Float64Array(blockCount * slots * k);
-  const areas = spec.areas ? spec.areas.subarray(start, end) : new Float32Array(end - start).fill(1);
-  const buffer = history ?? new Uint8Array(end - start);
-  const stride = history ? n : 0;
-  const origin = history ? start : 0;
-
+  const plan: ShardPlan = {
+    k,
+    slots,
+    buffer: history ?? new Uint8Array(end - start),
+    stride: history ? n : 0,
+    origin: history ? start : 0,
+    table,
+    thresholds,
+    rowBase,
+    areas: spec.areas ? spec.areas.subarray(start, end) : new Float64Array(end - start).fill(1),
+    blockCounts: new Float64Array(blockCount * slots * k),
+    areaByBlock: new Float64Array(blockCount * slots * k),
+    tally: new Int32Array(LANES * LANE),
+  };
+  const { buffer, origin, stride, areas, blockCounts, areaByBlock } = plan;
   for (let b = 0; b < blockCount; b++) {
     const lo = b * BLOCK_SIZE;
     const hi = Math.min(lo + BLOCK_SIZE, end - start);
@@ -186,20 +248,11 @@ export function simulateShard(spec: KernelSpec, task: ShardTask, history?: Uint8
     const area = areas[lo];
     let weighted = false;
     for (let i = lo; i < hi; i++) weighted ||= areas[i] !== area;
-    let first = 1;
-    if (initial.kind === 'distribution') {
-      first = 0;
-      buffer.fill(0, origin + lo, origin + hi);
-    } else {
-      for (let i = lo; i < hi; i++) {
-        const j = initial.states[start + i];
-        buffer[origin + i] = j;
-        blockCounts[areaBase + j]++;
-        if (weighted) areaByBlock[areaBase + j] += areas[i];
-      }
-    }
-    const place: BlockPlace = { lo, hi, first, slots, stride, origin, k, areaBase, weighted };
-    runBlock(blockSeed(task.seed, task.replicate, start / BLOCK_SIZE + b), place, buffer, table, thresholds, rowBase, blockCounts, areaByBlock, areas);
+    // Drawn starts are one more step from an all-zero row; given starts are copied in.
+    if (initial.kind === 'distribution') buffer.fill(0, origin + lo, origin + hi);
+    else buffer.set(initial.states.subarray(start + lo, start + hi), origin + lo);
+    const place: BlockPlace = { lo, hi, first: initial.kind === 'distribution' ? 0 : 1, areaBase, weighted };
+    runBlock(plan, place, new Int32Array(blockSeed(task.seed, task.replicate, start / BLOCK_SIZE + b).buffer));
     // Blocks of equal-area patches (all but the boundary of a grid) skip the per-patch adds.
     if (!weighted) for (let i = areaBase; i < areaBase + slots * k; i++) areaByBlock[i] = area * blockCounts[i];
   }
