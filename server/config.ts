@@ -3,6 +3,9 @@ import path from 'node:path';
 
 export const repoRoot = path.resolve(__dirname, '..');
 
+/** Port of the private PostgreSQL cluster that `npm start` and `npm test` run (PATCHCAST_PG_PORT). */
+export const localPgPort = (env: NodeJS.ProcessEnv = process.env): number => Number(env.PATCHCAST_PG_PORT ?? 54329);
+
 export type Config = {
   env: 'development' | 'production' | 'test';
   port: number;
@@ -30,7 +33,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   return {
     env: mode,
     port,
-    databaseUrl: env.DATABASE_URL ?? 'postgres://patchcast@127.0.0.1:54329/patchcast',
+    databaseUrl: env.DATABASE_URL ?? `postgres://patchcast@127.0.0.1:${localPgPort(env)}/patchcast`,
     sessionSecret: env.SESSION_SECRET ?? 'patchcast-development-secret-not-for-production',
     appUrl: env.APP_URL ?? `http://localhost:${port}`,
     smtpUrl: env.SMTP_URL ?? 'smtp://127.0.0.1:2525',

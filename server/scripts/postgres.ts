@@ -5,10 +5,10 @@ import { createHash } from 'node:crypto';
 import { chownSync, existsSync, mkdirSync, readdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import pg from 'pg';
-import { repoRoot } from '../config';
+import { localPgPort, repoRoot } from '../config';
 import { ensureDebianPackages, isRoot } from './system';
 
-export const LOCAL_PG_PORT = 54329;
+export const LOCAL_PG_PORT = localPgPort();
 export const LOCAL_PG_USER = 'patchcast';
 
 /**
