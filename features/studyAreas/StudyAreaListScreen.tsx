@@ -12,6 +12,7 @@ import { space } from '@/components/theme';
 import type { TeamSummary } from '@/shared/schemas';
 import { QueryErrorState } from '@/features/api/QueryErrorState';
 import { DemoNotice } from '@/features/teams/DemoNotice';
+import { UnreadNotices } from '@/features/notices/UnreadNotices';
 import { RoleBadge } from '@/features/teams/RoleBadge';
 import { TeamSwitcher } from '@/features/teams/TeamSwitcher';
 import { useCurrentTeam, type CurrentTeam } from '@/features/teams/useCurrentTeam';
@@ -80,6 +81,7 @@ export function StudyAreaListScreen(): ReactElement {
         <Heading level={1}>Study areas</Heading>
         {canEdit(current.team?.role) ? <ButtonLink href="/study-areas/new" label="New study area" size="sm" /> : null}
       </View>
+      <UnreadNotices />
       <StudyAreaListBody current={current} />
     </Screen>
   );
