@@ -12,6 +12,7 @@ import { Screen } from '@/components/Screen';
 import { Section } from '@/components/Section';
 import { Text } from '@/components/Text';
 import { TextLink } from '@/components/TextLink';
+import { ButtonLink } from '@/components/ButtonLink';
 import { space } from '@/components/theme';
 import type { Role, Run } from '@/shared/schemas';
 import { describeError } from '@/features/api/describeError';
@@ -65,6 +66,12 @@ function RunDetails({ run, role }: RunDetailsProps): ReactElement {
         </Banner>
       ) : null}
       <RunActions run={run} role={role} />
+      {run.status === 'succeeded' ? (
+        <View style={styles.title}>
+          <ButtonLink href={`/study-areas/${run.studyAreaId}/watch/${run.id}`} label="Watch the map and chart" />
+          <TextLink href={`/study-areas/${run.studyAreaId}/compare?runs=${run.id}`}>Compare with other runs</TextLink>
+        </View>
+      ) : null}
       <RunCaution />
       <Section title="Inputs" description="Frozen when the run started: later edits of the scenario or study area do not change this run.">
         <Card>

@@ -11,26 +11,21 @@ export type SectionNavProps = { studyAreaId: number; current: string };
 
 function Tab({ section, active }: { section: StudyAreaSection; active: boolean }): ReactElement {
   return (
-    <View aria-current={active ? 'page' : undefined} aria-disabled={section.path === null} style={[styles.tab, active && styles.active, section.path === null && styles.disabled]}>
+    <View aria-current={active ? 'page' : undefined} style={[styles.tab, active && styles.active]}>
       <Text variant="small" weight={active ? 'semibold' : 'medium'} tone={active ? 'primary' : 'muted'}>
         {section.label}
       </Text>
-      {section.path === null ? (
-        <Text variant="tiny" tone="muted">
-          coming next
-        </Text>
-      ) : null}
     </View>
   );
 }
 
-/** The study area's sections as tabs; sections not built yet are greyed and say so. */
+/** The study area's sections as tabs, the current one marked. */
 export function SectionNav({ studyAreaId, current }: SectionNavProps): ReactElement {
   return (
     <View role="navigation" aria-label="Study area sections" style={styles.row}>
       {STUDY_AREA_SECTIONS.map((section) => {
         const active = section.key === current;
-        if (section.path === null || active) return <Tab key={section.key} section={section} active={active} />;
+        if (active) return <Tab key={section.key} section={section} active />;
         return (
           <Link key={section.key} href={`/study-areas/${studyAreaId}${section.path}` as Href} aria-label={section.label}>
             <Tab section={section} active={false} />
@@ -53,5 +48,4 @@ const styles = StyleSheet.create({
     alignItems: 'center',
   },
   active: { backgroundColor: colors.sageTint, borderColor: colors.sage },
-  disabled: { opacity: 0.6, borderStyle: 'dashed' },
 });

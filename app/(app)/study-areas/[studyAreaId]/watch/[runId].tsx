@@ -1,0 +1,3 @@
+import { PlaybackScreen } from '@/features/playback/PlaybackScreen';
+
+export default PlaybackScreen;

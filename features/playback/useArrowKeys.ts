@@ -1,0 +1,2 @@
+/** Phones and tablets have no arrow keys: nothing to listen to. */
+export function useArrowKeys(_enabled: boolean): void {}
