@@ -1,63 +1,26 @@
-import { router } from 'expo-router';
 import { useState, type ReactElement } from 'react';
 
-import { Button } from '@/components/Button';
-import { FormError } from '@/components/FormError';
 import { Heading } from '@/components/Heading';
 import { Screen } from '@/components/Screen';
-import { Section } from '@/components/Section';
-import { Text } from '@/components/Text';
+import { SegmentedControl } from '@/components/SegmentedControl';
 import { TextLink } from '@/components/TextLink';
-import type { StudyAreaDetail } from '@/shared/schemas';
-import { describeError } from '@/features/api/describeError';
 
-import { pickTextFile, type PickedTextFile } from '../scenarios/pickTextFile';
 import { useNumericParam } from '../scenarios/routeParams';
 import { StudyAreaGate } from '../scenarios/StudyAreaGate';
 import { useStudyAreaContext } from '../scenarios/useStudyAreaContext';
-import { useCreateSurvey, useInspectSurvey } from './queries';
-import { SurveyMappingForm } from './SurveyMappingForm';
+import { MapPairUpload } from './MapPairUpload';
+import { PlotSurveyUpload } from './PlotSurveyUpload';
 
-type UploadProps = { studyArea: StudyAreaDetail };
-
-function SurveyUpload({ studyArea }: UploadProps): ReactElement {
-  const [file, setFile] = useState<PickedTextFile | null>(null);
-  const inspect = useInspectSurvey(studyArea.id);
-  const create = useCreateSurvey(studyArea.id);
-  const choose = async (): Promise<void> => {
-    const picked = await pickTextFile();
-    if (!picked) return;
-    setFile(picked);
-    create.reset();
-    inspect.mutate(picked);
-  };
-  return (
-    <>
-      <Section title="Plot resurveys" description="A CSV with one row per plot visit: which plot, when, and the cover seen. Transitions are counted within each plot, between visits one step apart.">
-        <Button label={file ? 'Choose another file' : 'Choose a CSV file'} variant={file ? 'secondary' : 'primary'} busy={inspect.isPending} onPress={() => void choose()} />
-        {file ? <Text variant="small" tone="muted">{`Chosen: ${file.name}`}</Text> : null}
-        <FormError message={describeError(inspect.error)} title="The file could not be read" />
-      </Section>
-      {file && inspect.data ? (
-        <SurveyMappingForm
-          key={file.name + inspect.data.rowCount}
-          file={file}
-          inspection={inspect.data}
-          states={studyArea.states}
-          busy={create.isPending}
-          error={create.error}
-          onCreate={(request) =>
-            create.mutate(request, { onSuccess: (survey) => router.replace(`/study-areas/${studyArea.id}/surveys/${survey.id}`) })
-          }
-        />
-      ) : null}
-    </>
-  );
-}
+type SurveyKind = 'plots' | 'map-pair';
+const KINDS: ReadonlyArray<{ value: SurveyKind; label: string }> = [
+  { value: 'plots', label: 'Plot resurveys (CSV)' },
+  { value: 'map-pair', label: 'Two dated cover maps' },
+];
 
 export function NewSurveyScreen(): ReactElement {
   const studyAreaId = useNumericParam('studyAreaId');
   const context = useStudyAreaContext(studyAreaId);
+  const [kind, setKind] = useState<SurveyKind>('plots');
   return (
     <Screen title="Upload a survey">
       <StudyAreaGate context={context}>
@@ -65,7 +28,8 @@ export function NewSurveyScreen(): ReactElement {
           <>
             <TextLink href={`/study-areas/${studyArea.id}/surveys`}>{`← Surveys of ${studyArea.name}`}</TextLink>
             <Heading level={1}>Upload a survey</Heading>
-            <SurveyUpload studyArea={studyArea} />
+            <SegmentedControl label="Kind of survey" options={KINDS} value={kind} onChange={setKind} size="md" />
+            {kind === 'plots' ? <PlotSurveyUpload studyArea={studyArea} /> : <MapPairUpload studyArea={studyArea} />}
           </>
         )}
       </StudyAreaGate>

@@ -14,6 +14,7 @@ import { serverFieldErrors } from '@/features/api/fieldErrors';
 
 import type { PickedTextFile } from '../scenarios/pickTextFile';
 import { defaultMapping } from './defaultMapping';
+import { LabelMappingSection } from './LabelMappingSection';
 import type { CreateSurveyRequest } from './queries';
 
 export type SurveyMappingFormProps = {
@@ -31,7 +32,6 @@ const ROLES: ReadonlyArray<{ role: Role; label: string; hint: string }> = [
   { role: 'time', label: 'Time column', hint: 'When (a year or a visit number)' },
   { role: 'state', label: 'State column', hint: 'The cover recorded' },
 ];
-const LEAVE_OUT = '';
 
 /** Column mapping, then value mapping from the file's labels to the cover states, then name and step. */
 export function SurveyMappingForm({ file, inspection, states, busy, error, onCreate }: SurveyMappingFormProps): ReactElement {
@@ -45,7 +45,6 @@ export function SurveyMappingForm({ file, inspection, states, busy, error, onCre
   const [name, setName] = useState(file.name.replace(/\.[^.]+$/, ''));
   const [timeStep, setTimeStep] = useState('1');
   const columnOptions = inspection.columns.map((column) => ({ value: column.name, label: column.name }));
-  const stateOptions = [...states.map((state) => ({ value: state.code, label: `${state.code} · ${state.name}` })), { value: LEAVE_OUT, label: 'Leave out' }];
   const labels = inspection.columns.find((column) => column.name === columns.state)?.values ?? [];
   const fieldErrors = serverFieldErrors(error);
   const chooseColumn = (role: Role, value: string): void => {
@@ -64,22 +63,15 @@ export function SurveyMappingForm({ file, inspection, states, busy, error, onCre
           </View>
         ))}
       </Section>
-      <Section title="States" description={`Which cover state each label in "${columns.state}" means. Rows you leave out are not counted.`}>
-        {labels.map(({ value, count }) => (
-          <SegmentedControl
-            key={value}
-            label={`"${value}" (${count.toLocaleString('en-US')} rows)`}
-            options={stateOptions}
-            value={mapping[value] ?? LEAVE_OUT}
-            onChange={(code) => setMapping((current) => ({ ...current, [value]: code === LEAVE_OUT ? null : code }))}
-          />
-        ))}
-        {fieldErrors.mapping ? (
-          <Text variant="small" tone="danger">
-            {fieldErrors.mapping}
-          </Text>
-        ) : null}
-      </Section>
+      <LabelMappingSection
+        description={`Which cover state each label in "${columns.state}" means. Rows you leave out are not counted.`}
+        labels={labels}
+        unit={['row', 'rows']}
+        states={states}
+        mapping={mapping}
+        onChange={setMapping}
+        error={fieldErrors.mapping}
+      />
       <Section title="Survey">
         <TextField label="Survey name" value={name} onChangeText={setName} error={fieldErrors.name} />
         <TextField

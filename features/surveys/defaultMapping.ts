@@ -2,6 +2,11 @@ import type { CoverState, StateMapping, SurveyInspection } from '@/shared/schema
 
 import { namesState } from '../scenarios/matrix-editor/pasteBlock';
 
+/** Each label with a suggested state code, else the state it names by code or name, else left out (null). */
+export function matchLabels(labels: readonly string[], states: readonly CoverState[], suggested: Readonly<StateMapping> = {}): StateMapping {
+  return Object.fromEntries(labels.map((label) => [label, suggested[label] ?? states.find((state) => namesState(label, state))?.code ?? null]));
+}
+
 /**
  * The value mapping to start from: the server's suggestion for the column it guessed, else each
  * label matched to a state by code or name, else left out (null) for the person to choose.
@@ -9,7 +14,5 @@ import { namesState } from '../scenarios/matrix-editor/pasteBlock';
 export function defaultMapping(inspection: SurveyInspection, stateColumn: string, states: readonly CoverState[]): StateMapping {
   const values = inspection.columns.find((column) => column.name === stateColumn)?.values ?? [];
   const suggested = stateColumn === inspection.guessedColumns.state ? inspection.suggestedMapping : {};
-  return Object.fromEntries(
-    values.map(({ value }) => [value, suggested[value] ?? states.find((state) => namesState(value, state))?.code ?? null]),
-  );
+  return matchLabels(values.map(({ value }) => value), states, suggested);
 }

@@ -79,7 +79,7 @@ export const mapPairFieldsSchema = z
     earlierDate: date('earlierDate'),
     laterDate: date('laterDate'),
   })
-  .refine((f) => f.earlierDate < f.laterDate, { path: ['laterDate'], message: 'laterDate must be after earlierDate' });
+  .refine((f) => f.earlierDate < f.laterDate, { path: ['laterDate'], message: 'the later map must be dated after the earlier one' });
 export type MapPairFields = z.infer<typeof mapPairFieldsSchema>;
 
 /** PATCH /surveys/:surveyId */

@@ -213,6 +213,6 @@ describe('a pair of dated cover maps', () => {
     expect(one.status).toBe(400);
     expect(one.body.error.message).toMatch(/form field "later"/);
     const dates = await f.upload('editor', url(`/study-areas/${area}/surveys/map-pair`), files, { ...mapFields, laterDate: '2001-01-01' });
-    expect(dates.body.error.message).toMatch(/laterDate must be after earlierDate/);
+    expect(dates.body.error.message).toMatch(/the later map must be dated after the earlier one/);
   });
 });
