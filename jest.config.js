@@ -31,6 +31,14 @@ module.exports = {
       testMatch: ['<rootDir>/tests/unit/**/*.test.ts', '<rootDir>/shared/**/*.test.ts', '<rootDir>/features/**/*.test.ts'],
     },
     {
+      // React Native components rendered with jest-expo's preset and Testing Library.
+      preset: 'jest-expo',
+      rootDir: __dirname,
+      displayName: 'components',
+      testMatch: ['<rootDir>/features/**/*.test.tsx', '<rootDir>/components/**/*.test.tsx'],
+      moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },
+    },
+    {
       ...common,
       displayName: 'api',
       testMatch: ['<rootDir>/tests/api/**/*.test.ts'],

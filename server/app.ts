@@ -26,6 +26,7 @@ import { noticeRoutes } from './routes/notices';
 import { createRunQueue } from './jobs/run-queue';
 import { scenarioRoutes, studyAreaScenarioRoutes } from './routes/scenarios';
 import { studyAreaSurveyRoutes, surveyRoutes } from './routes/surveys';
+import { downloadRoutes } from './routes/downloads';
 
 export type App = { app: express.Express; close(): Promise<void> };
 
@@ -81,6 +82,7 @@ export function createApp(ctx: AppContext): App {
   api.use('/runs', requireSignIn, runRoutes(ctx, runQueue));
   api.use('/notices', requireSignIn, noticeRoutes());
   api.use('/admin', requireSignIn, adminRoutes(ctx));
+  api.use(downloadRoutes());
   if (config.outboxEnabled) api.use('/dev', requireSignIn, devRoutes(ctx));
   api.use(apiNotFound);
   app.use('/api/v1', api);

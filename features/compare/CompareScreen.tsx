@@ -6,6 +6,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { Button } from '@/components/Button';
 import { Heading } from '@/components/Heading';
+import { DownloadLink } from '@/components/DownloadLink';
 import { SectionNav } from '@/features/studyAreas/SectionNav';
 import { LoadingState } from '@/components/LoadingState';
 import { Screen } from '@/components/Screen';
@@ -89,6 +90,7 @@ export function CompareScreen(): ReactElement {
       {runs.isPending ? <LoadingState label="Loading the runs…" /> : <RunPicker runs={finished} picked={ids} onToggle={pick} />}
       <View style={styles.share}>
         <Button label="Copy link" variant="secondary" size="sm" disabled={ids.length < COMPARE_LIMITS.min} onPress={() => void shareLink(path).then(setCopied)} />
+        {ids.length >= COMPARE_LIMITS.min ? <DownloadLink url={`/api/v1/study-areas/${studyAreaId}/compare.csv?runs=${ids.join(',')}`}>Download the comparison (CSV)</DownloadLink> : null}
         {copied === true ? <Text variant="small" tone="primary">Link copied: it opens this comparison for a teammate.</Text> : null}
         {copied === false ? <Text variant="small" tone="danger">{`The browser did not allow copying. The link is ${path}`}</Text> : null}
       </View>

@@ -19,6 +19,7 @@ import { describeError } from '@/features/api/describeError';
 import { QueryErrorState } from '@/features/api/QueryErrorState';
 import { useNumericParam } from '@/features/scenarios/routeParams';
 import { useStudyAreaContext } from '@/features/scenarios/useStudyAreaContext';
+import { RunDownloads } from '@/features/reports/RunDownloads';
 import { canEdit } from '@/features/studyAreas/roles';
 import { formatDateTime } from '@/features/ui/formatDate';
 
@@ -78,6 +79,7 @@ function RunDetails({ run, role }: RunDetailsProps): ReactElement {
           <RunInputs run={run} />
         </Card>
       </Section>
+      <RunDownloads run={run} />
     </>
   );
 }

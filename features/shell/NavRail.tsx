@@ -9,6 +9,7 @@ import type { User } from '@/shared/schemas';
 
 import { NavLink } from './NavLink';
 import { isActive, type NavEntry } from './navEntries';
+import { SHELL_CHROME_IDS } from './printHidden';
 
 export type NavRailProps = { entries: NavEntry[]; user: User };
 
@@ -16,7 +17,7 @@ export type NavRailProps = { entries: NavEntry[]; user: User };
 export function NavRail({ entries, user }: NavRailProps): ReactElement {
   const pathname = usePathname();
   return (
-    <View style={styles.rail}>
+    <View nativeID={SHELL_CHROME_IDS.rail} style={styles.rail}>
       <View style={styles.brand}>
         <Wordmark />
       </View>

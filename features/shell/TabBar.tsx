@@ -7,6 +7,7 @@ import { colors } from '@/components/theme';
 
 import { NavLink } from './NavLink';
 import { isActive, type NavEntry } from './navEntries';
+import { SHELL_CHROME_IDS } from './printHidden';
 
 export type TabBarProps = { entries: NavEntry[] };
 
@@ -15,7 +16,7 @@ export function TabBar({ entries }: TabBarProps): ReactElement {
   const pathname = usePathname();
   const { bottom } = useSafeAreaInsets();
   return (
-    <View role="navigation" aria-label="Main" style={[styles.bar, { paddingBottom: bottom }]}>
+    <View nativeID={SHELL_CHROME_IDS.tabBar} role="navigation" aria-label="Main" style={[styles.bar, { paddingBottom: bottom }]}>
       {entries.map((entry) => (
         <NavLink key={entry.href} entry={entry} layout="tab" active={isActive(entry, pathname)} />
       ))}

@@ -1,6 +1,7 @@
 import type { ReactElement } from 'react';
 
 import { Heading } from '@/components/Heading';
+import { DownloadLink } from '@/components/DownloadLink';
 import { LoadingState } from '@/components/LoadingState';
 import { Screen } from '@/components/Screen';
 import { Section } from '@/components/Section';
@@ -34,6 +35,7 @@ function SurveyBody({ studyArea, surveyId, editable }: SurveyBodyProps): ReactEl
   return (
     <>
       <Heading level={1}>{survey.data.name}</Heading>
+      <DownloadLink url={`/api/v1/surveys/${survey.data.id}/estimate.csv`}>Download the estimate (CSV)</DownloadLink>
       <Text tone="muted">
         {reading.kind === 'plots'
           ? `${reading.plots} plots, ${reading.observations} visits; ${estimate.pairsUsed} transitions counted${reading.rowsLeftOut > 0 ? `, ${reading.rowsLeftOut} rows left out by the mapping` : ''}.`

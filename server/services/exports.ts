@@ -12,17 +12,20 @@ export function fileSlug(name: string): string {
   return name.normalize('NFKD').replace(/[^\w\s-]/g, '').trim().toLowerCase().replace(/[\s_]+/g, '-').slice(0, 60) || 'study-area';
 }
 
-/** Writes text pieces to the response, waiting whenever the socket's buffer is full. */
-async function streamPieces(res: Response, fileName: string, pieces: Iterable<string>): Promise<void> {
-  // RFC 7946 §12 registers application/geo+json.
-  res.attachment(fileName).type('application/geo+json');
-  for (const piece of pieces) {
+/**
+ * Writes text pieces to the response as a download, waiting whenever the socket's buffer is full.
+ * The type defaults to application/geo+json, registered by RFC 7946 §12.
+ */
+export async function streamPieces(res: Response, fileName: string, pieces: Iterable<string> | AsyncIterable<string>, type = 'application/geo+json'): Promise<void> {
+  res.attachment(fileName).type(type);
+  for await (const piece of pieces) {
     if (!res.write(piece)) await once(res, 'drain');
   }
   res.end();
 }
 
-async function streamPatches(res: Response, access: StudyAreaAccess, fileName: string, properties: (i: number, base: PatchProperties) => PatchProperties): Promise<void> {
+/** Streams every patch of the study area's grid as a Feature with `properties(i, base)`. */
+export async function streamPatches(res: Response, access: StudyAreaAccess, fileName: string, properties: (i: number, base: PatchProperties) => PatchProperties): Promise<void> {
   const { grid, boundary } = await loadStoredGrid(access.studyArea.id);
   const shape = projectBoundary(boundary, localProjection(grid.spec.projection));
   await streamPieces(res, fileName, patchFeatureCollection(grid, shape, (i) => properties(i, patchAttributes(grid, i))));

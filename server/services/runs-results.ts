@@ -9,7 +9,8 @@ import type { RunAccess } from './runs';
 
 const inflateAsync = promisify(inflate);
 
-function requireSucceeded(access: RunAccess): void {
+/** 409 unless the run has finished with results. */
+export function requireSucceeded(access: RunAccess): void {
   const { run } = access;
   if (run.status === 'succeeded') return;
   const why = run.status === 'failed' ? `it failed: ${run.error ?? 'no reason recorded'}` : run.status === 'cancelled' ? 'it was cancelled' : `it is ${run.status}`;

@@ -1,0 +1,3 @@
+import { RunReportScreen } from '@/features/reports/RunReportScreen';
+
+export default RunReportScreen;
