@@ -12,7 +12,7 @@ const SAMPLE_ROWS = 5;
 const COLUMN_NAMES = {
   plot: /^(plot|plot[ _-]?id|site|quadrat|transect|point)$/i,
   time: /^(time|year|yr|visit|survey[ _-]?year|date)$/i,
-  state: /^(state|cover|cover[ _-]?state|class|cover[ _-]?class|vegetation|veg[ _-]?type|community)$/i,
+  state: /^(state|cover|cover[ _-]?class|class|cover[ _-]?state|vegetation|veg[ _-]?type|community)$/i,
 };
 
 export function inspectSurveyCsv(fileName: string, text: string, states: readonly CoverState[]): SurveyInspection {
