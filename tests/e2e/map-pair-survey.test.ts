@@ -1,6 +1,7 @@
 // A survey from two dated cover maps in the browser: the demo editor picks an earlier and a later
 // invented map of Cinder Flat (west and east halves with a `veg` attribute), dates them, maps the
 // values to cover states and sees the estimated matrix. Screenshots on a phone and a wide screen.
+import { signInAsDemo } from '../support/demo-sign-in';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -8,7 +9,7 @@ import { bbox as turfBbox } from '@turf/turf';
 import type { Page } from 'playwright-core';
 import { openBrowser, screenshot, viewports } from '../support/browser';
 import { startLiveServer, type LiveServer } from '../support/live-server';
-import { DEMO_PASSWORD, DEMO_TEAM, demoPeople } from '../../server/seed/demo';
+import { DEMO_TEAM, demoPeople } from '../../server/seed/demo';
 
 jest.setTimeout(240_000);
 
@@ -44,14 +45,6 @@ afterAll(() => {
   rmSync(dir, { recursive: true, force: true });
 });
 
-async function signIn(page: Page, email: string): Promise<void> {
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByText('Sign in', { exact: true }).last().click();
-  await page.getByRole('heading', { name: 'Study areas' }).waitFor();
-}
-
 /** The demo study area's id, read through the API with the page's session. */
 async function cinderFlatId(page: Page): Promise<number> {
   const { teams } = (await (await page.request.get(`${server.url}/api/v1/teams`)).json()) as { teams: { id: number; name: string }[] };
@@ -71,7 +64,7 @@ async function chooseFile(page: Page, button: number, file: string): Promise<voi
 test('when the editor uploads two dated cover maps, then they map the attribute values and see the estimated matrix', async () => {
   const { page, close } = await openBrowser('wide');
   try {
-    await signIn(page, editor.email);
+    await signInAsDemo(page, server.url, editor.email);
     const studyAreaId = await cinderFlatId(page);
     await page.goto(`${server.url}/study-areas/${studyAreaId}/surveys/new`);
     await page.getByRole('radiogroup', { name: 'Kind of survey' }).getByRole('radio', { name: 'Two dated cover maps' }).click();

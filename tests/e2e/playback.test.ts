@@ -1,10 +1,11 @@
 // Watching a demo run and comparing two: play, scrub to the last step with the slider, open a
 // patch in the inspector, then compare the two Cinder Flat runs through a shareable link.
 // Screenshots on a phone (390 × 844) and a wide screen (1440 × 900).
+import { signInAsDemo } from '../support/demo-sign-in';
 import type { Page } from 'playwright-core';
 import { openBrowser, screenshot, viewports, type ViewportName } from '../support/browser';
 import { startLiveServer, type LiveServer } from '../support/live-server';
-import { DEMO_PASSWORD, DEMO_TEAM, demoPeople } from '../../server/seed/demo';
+import { DEMO_TEAM, demoPeople } from '../../server/seed/demo';
 
 jest.setTimeout(240_000);
 
@@ -18,14 +19,6 @@ beforeAll(async () => {
 afterAll(() => server?.close());
 
 type RunRow = { id: number; status: string; steps: number; yearsPerStep: number; inputs: { scenarioName: string; totalAreaM2: number } };
-
-async function signIn(page: Page): Promise<void> {
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(viewer.email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByText('Sign in', { exact: true }).last().click();
-  await page.getByRole('heading', { name: 'Study areas' }).waitFor();
-}
 
 /** Cinder Flat's id and its finished demo runs, read through the API with the page's session. */
 async function cinderFlatRuns(page: Page): Promise<{ studyAreaId: number; runs: RunRow[] }> {
@@ -71,7 +64,7 @@ async function tapPatch(page: Page): Promise<void> {
 async function watch(viewport: ViewportName): Promise<void> {
   const { page, close } = await openBrowser(viewport);
   try {
-    await signIn(page);
+    await signInAsDemo(page, server.url, viewer.email);
     const { studyAreaId, runs } = await cinderFlatRuns(page);
     expect(runs.length).toBeGreaterThanOrEqual(2);
     const run = runs[0];
@@ -121,7 +114,7 @@ async function watch(viewport: ViewportName): Promise<void> {
 async function compare(viewport: ViewportName): Promise<void> {
   const { page, close } = await openBrowser(viewport);
   try {
-    await signIn(page);
+    await signInAsDemo(page, server.url, viewer.email);
     const { studyAreaId, runs } = await cinderFlatRuns(page);
     const [a, b] = runs;
     await page.goto(`${server.url}/study-areas/${studyAreaId}/compare?runs=${a.id}`);
@@ -135,7 +128,7 @@ async function compare(viewport: ViewportName): Promise<void> {
     // A teammate opening the same address sees the same comparison.
     const { page: other, close: closeOther } = await openBrowser(viewport);
     try {
-      await signIn(other);
+      await signInAsDemo(other, server.url, viewer.email);
       await other.goto(page.url());
       await other.getByRole('table', { name: 'Comparison at the chosen step' }).waitFor();
       expect(await other.getByRole('checkbox', { checked: true }).count()).toBe(2);

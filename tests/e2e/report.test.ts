@@ -1,10 +1,11 @@
 // The printable run report for the demo viewer: reached from the run page's Downloads section,
 // it shows the inputs, shares, chart and three maps, and printed it drops the navigation.
 // Screenshots on a phone (390 × 844) and a wide screen (1440 × 900), on screen and as printed.
+import { signInAsDemo } from '../support/demo-sign-in';
 import type { Page } from 'playwright-core';
 import { openBrowser, screenshot, viewports, type ViewportName } from '../support/browser';
 import { startLiveServer, type LiveServer } from '../support/live-server';
-import { DEMO_PASSWORD, DEMO_TEAM, demoPeople } from '../../server/seed/demo';
+import { DEMO_TEAM, demoPeople } from '../../server/seed/demo';
 import { RUN_CAUTION } from '../../shared/schemas';
 
 jest.setTimeout(240_000);
@@ -16,14 +17,6 @@ beforeAll(async () => {
   server = await startLiveServer();
 });
 afterAll(() => server?.close());
-
-async function signIn(page: Page): Promise<void> {
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(viewer.email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByText('Sign in', { exact: true }).last().click();
-  await page.getByRole('heading', { name: 'Study areas' }).waitFor();
-}
 
 /** Cinder Flat's id and its first finished demo run, read through the API with the page's session. */
 async function firstCinderRun(page: Page): Promise<{ studyAreaId: number; runId: number; steps: number }> {
@@ -50,7 +43,7 @@ describe.each<ViewportName>(['phone', 'wide'])('on a %s screen', (viewport) => {
   test('when the demo viewer opens the report from the run page, then inputs, shares, chart and maps show, and print hides the navigation', async () => {
     const { page, close } = await openBrowser(viewport);
     try {
-      await signIn(page);
+      await signInAsDemo(page, server.url, viewer.email);
       const { studyAreaId, runId, steps } = await firstCinderRun(page);
       await page.goto(`${server.url}/study-areas/${studyAreaId}/runs/${runId}`);
       await page.getByRole('heading', { name: 'Downloads' }).waitFor();

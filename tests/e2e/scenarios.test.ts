@@ -1,11 +1,12 @@
 // Scenarios in the browser: the demo editor builds one by typing, by pasting a block copied from
 // a spreadsheet and from an uploaded plot survey; the demo viewer reads it and cannot change it.
 // Screenshots of the editor and its analysis panel on a phone and on a wide screen.
+import { signInAsDemo } from '../support/demo-sign-in';
 import path from 'node:path';
 import type { Locator, Page } from 'playwright-core';
 import { openBrowser, screenshot, viewports } from '../support/browser';
 import { startLiveServer, type LiveServer } from '../support/live-server';
-import { DEMO_PASSWORD, DEMO_TEAM, demoPeople } from '../../server/seed/demo';
+import { DEMO_TEAM, demoPeople } from '../../server/seed/demo';
 
 jest.setTimeout(240_000);
 
@@ -21,14 +22,6 @@ beforeAll(async () => {
   server = await startLiveServer();
 });
 afterAll(() => server?.close());
-
-async function signIn(page: Page, email: string): Promise<void> {
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByText('Sign in', { exact: true }).last().click();
-  await page.getByRole('heading', { name: 'Study areas' }).waitFor();
-}
 
 /** The demo study area's id, read through the API with the page's session. */
 async function cinderFlatId(page: Page): Promise<number> {
@@ -63,7 +56,7 @@ const NAMES = TYPED.map(([name]) => name);
 test('when the editor types a matrix, then bad entries are marked and the scenario is created with its analysis', async () => {
   const { page, close } = await openBrowser('wide');
   try {
-    await signIn(page, editor.email);
+    await signInAsDemo(page, server.url, editor.email);
     studyAreaId = await cinderFlatId(page);
     await page.goto(`${server.url}/study-areas/${studyAreaId}/scenarios/new`);
     await page.getByRole('heading', { name: 'New scenario' }).waitFor();
@@ -94,7 +87,7 @@ test('when the editor types a matrix, then bad entries are marked and the scenar
 test('when the editor pastes a block into a second phase, then a bad row is refused by the server and saved once normalised', async () => {
   const { page, close } = await openBrowser('wide');
   try {
-    await signIn(page, editor.email);
+    await signInAsDemo(page, server.url, editor.email);
     await page.goto(`${server.url}${scenarioPath}`);
     await page.getByRole('heading', { name: 'Grazing as now (typed)' }).waitFor();
     await page.getByRole('button', { name: 'Add phase' }).click();
@@ -128,7 +121,7 @@ test('when the editor pastes a block into a second phase, then a bad row is refu
 test('when the editor uploads a plot survey with other names, then it maps columns and labels and uses the estimate in a phase', async () => {
   const { page, close } = await openBrowser('wide');
   try {
-    await signIn(page, editor.email);
+    await signInAsDemo(page, server.url, editor.email);
     await page.goto(`${server.url}/study-areas/${studyAreaId}/surveys/new`);
     const chooser = page.waitForEvent('filechooser');
     await page.getByRole('button', { name: 'Choose a CSV file' }).click();
@@ -180,7 +173,7 @@ test('when the editor uploads a plot survey with other names, then it maps colum
 test('when the viewer opens the scenario, then they read it and cannot change it', async () => {
   const { page, close } = await openBrowser('phone');
   try {
-    await signIn(page, viewer.email);
+    await signInAsDemo(page, server.url, viewer.email);
     await page.goto(`${server.url}/study-areas/${studyAreaId}/scenarios`);
     await page.getByRole('link', { name: 'Grazing as now (typed)' }).waitFor();
     expect(await page.getByText('New scenario').count()).toBe(0);

@@ -1,13 +1,14 @@
 // Study areas through the real pages, on a phone and on a wide screen: the demo editor opens
 // Cinder Flat, creates a study area from a boundary file with the live grid preview, and sets its
 // start cover; the demo viewer can read but neither create nor delete.
+import { signInAsDemo } from '../support/demo-sign-in';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { openBrowser, screenshot, viewports, type ViewportName } from '../support/browser';
 import { startLiveServer, type LiveServer } from '../support/live-server';
-import { DEMO_PASSWORD, demoPeople } from '../../server/seed/demo';
+import { demoPeople } from '../../server/seed/demo';
 import { StartCover, StudyArea } from '../../server/models';
 import { formatArea, formatCount } from '../../features/studyAreas/formatArea';
 
@@ -24,14 +25,6 @@ const boundaries = path.resolve(__dirname, '..', '..', 'server', 'seed', 'bounda
 const heronBayFile = path.join(boundaries, 'heron-bay.geojson');
 const cinderFlatFile = path.join(boundaries, 'cinder-flat.geojson');
 const bowtieFile = path.resolve(__dirname, '..', 'fixtures', 'geo', 'broken', 'bowtie.geojson');
-
-async function signIn(page: Page, email: string): Promise<void> {
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByText('Sign in', { exact: true }).last().click();
-  await page.getByRole('heading', { name: 'Study areas' }).waitFor();
-}
 
 /** A cover map over Heron Bay: "Water" on the western third, "reed" on the middle third, nothing east. */
 function writeCoverMap(): string {
@@ -94,7 +87,7 @@ describe.each<ViewportName>(['phone', 'wide'])('on a %s screen', (viewport) => {
     const cinder = await StudyArea.findOne({ where: { name: 'Cinder Flat allotment' } });
     const { page, close } = await openBrowser(viewport);
     try {
-      await signIn(page, person('editor').email);
+      await signInAsDemo(page, server.url, person('editor').email);
       await page.getByRole('link', { name: 'Open Heron Bay marsh' }).waitFor();
       await page.getByRole('link', { name: 'New study area' }).waitFor();
       await screenshotWhole(page, `study-area-list-${viewport}`, viewport);
@@ -115,7 +108,7 @@ describe.each<ViewportName>(['phone', 'wide'])('on a %s screen', (viewport) => {
     const name = `Heron Bay trial (${viewport})`;
     const { page, close } = await openBrowser(viewport);
     try {
-      await signIn(page, person('editor').email);
+      await signInAsDemo(page, server.url, person('editor').email);
       await page.getByRole('link', { name: 'New study area' }).click();
       await page.getByRole('heading', { name: 'New study area' }).waitFor();
       await page.getByLabel('Name', { exact: true }).fill(name);
@@ -204,7 +197,7 @@ describe.each<ViewportName>(['phone', 'wide'])('on a %s screen', (viewport) => {
     const name = `Heron Bay trial (${viewport})`;
     const { page, close } = await openBrowser(viewport);
     try {
-      await signIn(page, person('owner').email);
+      await signInAsDemo(page, server.url, person('owner').email);
       await page.getByRole('link', { name: `Open ${name}` }).click();
       await page.getByRole('heading', { name }).waitFor();
       await page.getByLabel('Study area name').fill(`${name} renamed`);
@@ -223,7 +216,7 @@ describe.each<ViewportName>(['phone', 'wide'])('on a %s screen', (viewport) => {
   test('when the demo viewer signs in, then there is no way to create or delete a study area, and areas show in the chosen unit', async () => {
     const { page, close } = await openBrowser(viewport);
     try {
-      await signIn(page, person('viewer').email);
+      await signInAsDemo(page, server.url, person('viewer').email);
       await page.getByRole('link', { name: 'Open Cinder Flat allotment' }).waitFor();
       expect(await page.getByText('New study area').count()).toBe(0);
       await page.getByRole('link', { name: 'Open Cinder Flat allotment' }).click();
