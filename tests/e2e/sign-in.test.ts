@@ -30,6 +30,9 @@ describe.each<ViewportName>(['phone', 'wide'])('on a %s screen', (viewport) => {
 
       await page.getByRole('heading', { name: 'Study areas' }).waitFor();
       await page.getByText(DEMO_TEAM).first().waitFor();
+      // The list itself: both invented demo study areas.
+      await page.getByText('Cinder Flat allotment').first().waitFor();
+      await page.getByText('Heron Bay marsh').first().waitFor();
       await screenshot(page, `study-areas-${viewport}`);
     } finally {
       await close();
