@@ -10,13 +10,15 @@ export function Card({ children }: CardProps): ReactElement {
   return <View style={styles.card}>{children}</View>;
 }
 
+/** The surface of every card, shared with CardLink. */
+export const cardSurface = {
+  backgroundColor: colors.surface,
+  borderColor: colors.line,
+  borderWidth: 1,
+  borderRadius: radius.lg,
+  padding: space.lg,
+} as const;
+
 const styles = StyleSheet.create({
-  card: {
-    backgroundColor: colors.surface,
-    borderColor: colors.line,
-    borderWidth: 1,
-    borderRadius: radius.lg,
-    padding: space.lg,
-    gap: space.md,
-  },
+  card: { ...cardSurface, gap: space.md },
 });

@@ -2,7 +2,8 @@ import { Link, type Href } from 'expo-router';
 import type { ReactElement, ReactNode } from 'react';
 import { Pressable, StyleSheet } from 'react-native';
 
-import { colors, radius, space } from './theme';
+import { cardSurface } from './Card';
+import { space } from './theme';
 
 export type CardLinkProps = { href: Href; children: ReactNode; /** The link's accessible name. */ label: string };
 
@@ -18,12 +19,5 @@ export function CardLink({ href, children, label }: CardLinkProps): ReactElement
 }
 
 const styles = StyleSheet.create({
-  card: {
-    backgroundColor: colors.surface,
-    borderColor: colors.line,
-    borderWidth: 1,
-    borderRadius: radius.lg,
-    padding: space.lg,
-    gap: space.sm,
-  },
+  card: { ...cardSurface, gap: space.sm },
 });

@@ -4,7 +4,8 @@ import { Banner } from '@/components/Banner';
 import { Button } from '@/components/Button';
 import { FormError } from '@/components/FormError';
 import { TextField } from '@/components/TextField';
-import { PASSWORD_MIN_LENGTH, changePasswordBodySchema } from '@/shared/schemas';
+import { NewPasswordField } from '@/components/NewPasswordField';
+import { changePasswordBodySchema } from '@/shared/schemas';
 import { describeError } from '@/features/api/describeError';
 import { useValidatedSubmit } from '@/features/api/useValidatedSubmit';
 
@@ -37,14 +38,11 @@ export function PasswordForm(): ReactElement {
         autoComplete="current-password"
         error={errors.currentPassword}
       />
-      <TextField
+      <NewPasswordField
         label="New password"
         value={newPassword}
         onChangeText={setNewPassword}
-        secureTextEntry
-        autoComplete="new-password"
         onSubmitEditing={send}
-        hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
         error={errors.newPassword}
       />
       <FormError message={describeError(change.error)} />

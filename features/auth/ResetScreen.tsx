@@ -4,9 +4,9 @@ import { useState, type ReactElement } from 'react';
 import { Banner } from '@/components/Banner';
 import { Button } from '@/components/Button';
 import { FormError } from '@/components/FormError';
-import { TextField } from '@/components/TextField';
+import { NewPasswordField } from '@/components/NewPasswordField';
 import { TextLink } from '@/components/TextLink';
-import { PASSWORD_MIN_LENGTH, resetBodySchema } from '@/shared/schemas';
+import { resetBodySchema } from '@/shared/schemas';
 import { describeError } from '@/features/api/describeError';
 import { useValidatedSubmit } from '@/features/api/useValidatedSubmit';
 
@@ -44,14 +44,11 @@ export function ResetScreen(): ReactElement {
       heading="Choose a new password"
       footer={<TextLink href="/forgot">Link expired? Ask for a new one</TextLink>}
     >
-      <TextField
+      <NewPasswordField
         label="New password"
         value={password}
         onChangeText={setPassword}
-        secureTextEntry
-        autoComplete="new-password"
         onSubmitEditing={send}
-        hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
         error={errors.password}
       />
       <FormError message={errors.token ?? describeError(reset.error)} />

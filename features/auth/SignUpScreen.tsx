@@ -5,8 +5,9 @@ import { Banner } from '@/components/Banner';
 import { Button } from '@/components/Button';
 import { FormError } from '@/components/FormError';
 import { TextField } from '@/components/TextField';
+import { NewPasswordField } from '@/components/NewPasswordField';
 import { TextLink } from '@/components/TextLink';
-import { PASSWORD_MIN_LENGTH, signUpBodySchema } from '@/shared/schemas';
+import { signUpBodySchema } from '@/shared/schemas';
 import { describeError } from '@/features/api/describeError';
 import { useValidatedSubmit } from '@/features/api/useValidatedSubmit';
 
@@ -52,14 +53,11 @@ export function SignUpScreen(): ReactElement {
       ) : null}
       <TextField label="Name" value={name} onChangeText={setName} autoComplete="name" error={errors.name} />
       <TextField label="E-mail" value={email} onChangeText={setEmail} autoComplete="email" keyboardType="email-address" error={errors.email} />
-      <TextField
+      <NewPasswordField
         label="Password"
         value={password}
         onChangeText={setPassword}
-        secureTextEntry
-        autoComplete="new-password"
         onSubmitEditing={send}
-        hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
         error={errors.password}
       />
       <FormError message={errors.invitation ?? describeError(signUp.error)} />
