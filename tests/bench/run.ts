@@ -2,10 +2,18 @@
 // `bench(): Promise<void>` and prints its own lines; benchmarks print ratios, they are not tests.
 import { readdirSync } from 'node:fs';
 import { join } from 'node:path';
+import { ensureDebianPackages } from '../../server/scripts/system';
 
 type BenchModule = { bench: () => Promise<void> };
 
+/** The reference implementations the benchmarks run beside ours (probe file for each). */
+const referencePackages = {
+  'python3-numpy': '/usr/lib/python3/dist-packages/numpy/__init__.py',
+  gcc: '/usr/bin/gcc',
+};
+
 async function main(): Promise<void> {
+  ensureDebianPackages(referencePackages, 'the benchmarks');
   const only = process.argv[2];
   const files = readdirSync(__dirname)
     .filter((name) => name.endsWith('.bench.ts') && (!only || name.includes(only)))
