@@ -1,6 +1,8 @@
-// Server hygiene: security headers, production cookie flags and no Outbox in production.
+// Server hygiene: security headers, production cookie flags, no Outbox in production, and kept
+// uploads only ever served back as downloads.
 import request from 'supertest';
 import { client } from '../support/client';
+import { startFixture, type Fixture } from '../support/study-area-fixture';
 import { startTestApp, type TestApp } from '../support/test-app';
 
 describe('in production', () => {
@@ -44,5 +46,29 @@ describe('headers', () => {
     expect(res.status).toBe(401);
     expect(Object.keys(res.body)).toEqual(['error']);
     expect(JSON.stringify(res.body)).not.toMatch(/at .*\.ts:\d+/);
+  });
+});
+
+describe('uploads served back', () => {
+  let f: Fixture;
+  beforeAll(async () => {
+    f = await startFixture();
+  });
+  afterAll(() => f.t.close());
+
+  test('when a kept upload holds HTML and has an HTML-looking name, then it comes back as a byte-identical download, never as a page', async () => {
+    const area = await f.makeArea(['Shrub', 'Grass']);
+    // A valid plot table whose plot ids are markup: stored and served as the bytes that came in.
+    const csv = Buffer.from('plot,year,cover\n<script>alert(1)</script>,2010,shrub\n<script>alert(1)</script>,2011,grass\n');
+    const name = '<img src=x onerror=alert(1)>.html';
+    const fields = { name: 'Markup plots', plotColumn: 'plot', timeColumn: 'year', stateColumn: 'cover', mapping: JSON.stringify({ shrub: 'S1', grass: 'S2' }) };
+    const created = await f.upload('editor', `/api/v1/study-areas/${area}/surveys`, { file: [csv, name] }, fields);
+    expect(created.status).toBe(201);
+    const res = await f.as.viewer.get(`/api/v1/surveys/${created.body.survey.id}/files/table`);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('application/octet-stream');
+    expect(res.headers['content-disposition']).toMatch(/^attachment;/);
+    expect(res.headers['x-content-type-options']).toBe('nosniff');
+    expect(Buffer.compare(res.body as Buffer, csv)).toBe(0);
   });
 });
