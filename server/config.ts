@@ -14,6 +14,9 @@ export type Config = {
   appUrl: string;
   smtpUrl: string;
   mailFrom: string;
+  /** Retries of an undelivered e-mail, waiting about mailRetryDelaySeconds × 2^n before retry n+1 (pg-boss backoff). */
+  mailRetryLimit: number;
+  mailRetryDelaySeconds: number;
   outboxDir: string;
   webDir: string;
   /** The development Outbox page and route; off in production. */
@@ -38,6 +41,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     appUrl: env.APP_URL ?? `http://localhost:${port}`,
     smtpUrl: env.SMTP_URL ?? 'smtp://127.0.0.1:2525',
     mailFrom: env.MAIL_FROM ?? 'Patchcast <no-reply@patchcast.local>',
+    // 11 tries over about 13 hours (17 at most): an SMTP outage of an afternoon loses nothing.
+    mailRetryLimit: Number(env.MAIL_RETRY_LIMIT ?? 10),
+    mailRetryDelaySeconds: Number(env.MAIL_RETRY_DELAY_SECONDS ?? 30),
     outboxDir: env.OUTBOX_DIR ?? path.join(repoRoot, '.data', 'outbox'),
     webDir: env.WEB_DIR ?? path.join(repoRoot, 'dist'),
     outboxEnabled: mode !== 'production',

@@ -10,18 +10,20 @@ export async function startServer(): Promise<() => Promise<void>> {
   const config = loadConfig();
   const logger = createLogger(config);
   const sequelize = connectDatabase(config.databaseUrl);
-  const mailer = createMailer(config.smtpUrl, config.mailFrom, logger);
+  const mailer = createMailer(config, sequelize, logger);
   const { app, close } = createApp({ config, sequelize, mailer, logger });
   const server = await new Promise<import('node:http').Server>((resolve) => {
     const s = app.listen(config.port, () => resolve(s));
   });
   logger.info({ port: config.port }, 'Patchcast server listening');
-  // The embedded run worker (PATCHCAST_EMBEDDED_WORKER=0 leaves runs to `npm run worker` processes).
+  // The embedded run worker, which also delivers the mail (PATCHCAST_EMBEDDED_WORKER=0 leaves runs
+  // and mail to `npm run worker` processes).
   const worker = process.env.PATCHCAST_EMBEDDED_WORKER === '0' ? null : await startRunWorker({ config, mailer, logger });
   return async () => {
     await worker?.stop();
     await new Promise<void>((resolve) => server.close(() => resolve()));
     await close();
+    await mailer.stop();
     await sequelize.close();
   };
 }

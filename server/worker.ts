@@ -1,5 +1,5 @@
-// `npm run worker`: a run worker process against DATABASE_URL (the same database as the web
-// server). Start as many as the machine has cores; stop with Ctrl-C or SIGTERM.
+// `npm run worker`: a run worker process (runs and outgoing mail) against DATABASE_URL (the same
+// database as the web server). Start as many as the machine has cores; stop with Ctrl-C or SIGTERM.
 import { loadConfig } from './config';
 import { connectDatabase } from './db';
 import { createLogger } from './logger';
@@ -10,7 +10,7 @@ async function main(): Promise<void> {
   const config = loadConfig();
   const logger = createLogger(config);
   const sequelize = connectDatabase(config.databaseUrl);
-  const mailer = createMailer(config.smtpUrl, config.mailFrom, logger);
+  const mailer = createMailer(config, sequelize, logger);
   const worker = await startRunWorker({ config, mailer, logger });
   logger.info({ pid: process.pid }, 'Patchcast run worker started');
   let stopping = false;
@@ -18,6 +18,7 @@ async function main(): Promise<void> {
     if (stopping) return;
     stopping = true;
     await worker.stop();
+    await mailer.stop();
     await sequelize.close();
     process.exit(0);
   };

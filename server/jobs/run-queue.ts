@@ -1,8 +1,7 @@
 // The web server's side of the queue: sends one shard job per shard of a run attempt. pg-boss
 // starts on first use, so that an app that never starts a run never connects it.
-import type PgBoss from 'pg-boss';
 import type { Logger } from 'pino';
-import { JOB_RETRY_LIMIT, QUEUES, startBoss, type ShardJobData } from './boss';
+import { JOB_RETRY_LIMIT, QUEUES, lazyBoss, type ShardJobData } from './boss';
 import { loadJobSettings, shardExpirySeconds } from './settings';
 import { JOBS_SENT, localJobs } from './wake';
 
@@ -13,8 +12,7 @@ export type RunQueue = { sendAttempt(attempt: AttemptToQueue): Promise<void>; st
 
 export function createRunQueue(databaseUrl: string, logger: Logger): RunQueue {
   const settings = loadJobSettings();
-  let boss: Promise<PgBoss> | null = null;
-  const started = (): Promise<PgBoss> => (boss ??= startBoss(databaseUrl, settings, logger, { supervise: false }));
+  const boss = lazyBoss(databaseUrl, settings, logger);
   return {
     async sendAttempt({ runId, attempt, shardCount, shownShards, patchStepsPerShard }) {
       const expireInSeconds = shardExpirySeconds(settings, patchStepsPerShard);
@@ -25,11 +23,9 @@ export function createRunQueue(databaseUrl: string, logger: Logger): RunQueue {
         expireInSeconds,
         retryLimit: JOB_RETRY_LIMIT,
       }));
-      await (await started()).insert(jobs);
+      await (await boss.started()).insert(jobs);
       localJobs.emit(JOBS_SENT);
     },
-    async stop() {
-      if (boss) await (await boss).stop({ graceful: false, wait: true });
-    },
+    stop: boss.stop,
   };
 }

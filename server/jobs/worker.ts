@@ -1,8 +1,10 @@
-// A run worker: takes shard, merge and dead-letter jobs from pg-boss. The web server runs one
-// (embedded); `npm run worker` runs one per process against the same DATABASE_URL.
-import pg from 'pg';
+// A run worker: takes shard, merge and dead-letter jobs from pg-boss, and delivers queued mail.
+// The web server runs one (embedded); `npm run worker` runs one per process against the same
+// DATABASE_URL.
 import type PgBoss from 'pg-boss';
 import type { AppContext } from '../context';
+import { createPool } from '../db';
+import { workMail } from '../mail/sender';
 import { JOB_RETRY_LIMIT, QUEUES, startBoss, type MergeJobData, type ShardJobData } from './boss';
 import { bossDb } from './db';
 import { createInputsCache } from './inputs-cache';
@@ -25,9 +27,7 @@ function deadReason(job: DeadJob): string {
 
 export async function startRunWorker(ctx: Pick<AppContext, 'config' | 'mailer' | 'logger'>, settings: JobSettings = loadJobSettings()): Promise<RunWorker> {
   const boss = await startBoss(ctx.config.databaseUrl, settings, ctx.logger, { supervise: true });
-  const pool = new pg.Pool({ connectionString: ctx.config.databaseUrl, max: settings.concurrency + 3, application_name: 'patchcast-worker' });
-  // An idle connection closed by the server (restart, failover) is replaced on next use.
-  pool.on('error', (err) => ctx.logger.warn({ err }, 'idle worker database connection lost'));
+  const pool = createPool(ctx.config.databaseUrl, { name: 'patchcast-worker', max: settings.concurrency + 3 }, ctx.logger);
   const shards = createShardPool(settings.concurrency);
   const workerIds: string[] = [];
   let mergeWorker = '';
@@ -63,6 +63,7 @@ export async function startRunWorker(ctx: Pick<AppContext, 'config' | 'mailer' |
       await failAttempt(deps, job.data.runId, job.data.attempt, deadReason(job as DeadJob));
     }),
   );
+  workerIds.push(await workMail(boss, ctx.config, ctx.logger, settings.pollSeconds));
 
   const wake = (): void => workerIds.forEach((id) => boss.notifyWorker(id));
   localJobs.on(JOBS_SENT, wake);

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import type { AppContext } from '../context';
-import { AppError } from '../http/errors';
+import { databaseUnavailable } from '../http/errors';
 
 export function healthRoutes(ctx: AppContext): Router {
   const router = Router();
@@ -8,7 +8,7 @@ export function healthRoutes(ctx: AppContext): Router {
     try {
       await ctx.sequelize.query('SELECT 1');
     } catch {
-      throw new AppError(503, 'database_unavailable', 'The database is not answering; try again shortly.');
+      throw databaseUnavailable();
     }
     res.json({ status: 'ok', database: 'ok' });
   });

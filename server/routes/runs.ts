@@ -4,13 +4,15 @@ import { parseInput } from '../http/validate';
 import { currentUser } from '../http/require-user';
 import type { RunQueue } from '../jobs/run-queue';
 import * as runs from '../services/runs';
-import { runFrame, runSummary } from '../services/runs-results';
+import { resultsAccess, runFrame, runSummaryJson, type ResultsAccess } from '../services/runs-results';
 import { idParamSchema, startRunBodySchema, stepParamSchema, type Role } from '../../shared/schemas';
 
 const EDITORS: readonly Role[] = ['owner', 'editor'];
+const FINISHED_RESULTS_CACHING = 'private, max-age=86400, immutable';
 
 const runOf = (req: Request, allowed?: readonly Role[]): Promise<runs.RunAccess> =>
   runs.runAccess(parseInput(idParamSchema, req.params.runId, 'path'), currentUser(req), allowed);
+const resultsOf = (req: Request): Promise<ResultsAccess> => resultsAccess(parseInput(idParamSchema, req.params.runId, 'path'), currentUser(req));
 
 /** Mounted at /scenarios/:scenarioId/runs. */
 export function scenarioRunRoutes(ctx: AppContext, queue: RunQueue): Router {
@@ -48,14 +50,16 @@ export function runRoutes(ctx: AppContext, queue: RunQueue): Router {
     res.json({ run: await runs.retryRun(ctx, queue, await runOf(req, EDITORS)) });
   });
 
+  // A succeeded run's results never change, so the browser may keep them (RFC 8246, immutable).
   router.get('/:runId/summary', async (req, res) => {
-    res.json(await runSummary(await runOf(req)));
+    const json = await runSummaryJson(await resultsOf(req));
+    res.type('json').set('cache-control', FINISHED_RESULTS_CACHING).send(json);
   });
 
   router.get('/:runId/frames/:step', async (req, res) => {
-    const access = await runOf(req);
+    const access = await resultsOf(req);
     const bytes = await runFrame(access, parseInput(stepParamSchema, req.params.step, 'path'));
-    res.type('application/octet-stream').set('cache-control', 'private, max-age=86400, immutable').send(bytes);
+    res.type('application/octet-stream').set('cache-control', FINISHED_RESULTS_CACHING).send(bytes);
   });
 
   return router;

@@ -27,7 +27,7 @@ function clusterHome(): string {
   return home;
 }
 
-type ClusterPaths = { dataDir: string; socketDir: string; logFile: string };
+export type ClusterPaths = { dataDir: string; socketDir: string; logFile: string };
 
 function clusterPaths(): ClusterPaths {
   const home = clusterHome();
@@ -41,13 +41,16 @@ function binDir(): string | null {
   return versions.length ? path.join(base, versions[0], 'bin') : null;
 }
 
-/** PostgreSQL refuses to run as root, so as root the cluster belongs to the `postgres` user. */
-function runPg(bin: string, args: string[]): void {
-  if (isRoot()) execFileSync('runuser', ['-u', 'postgres', '--', bin, ...args], { stdio: 'inherit' });
-  else execFileSync(bin, args, { stdio: 'inherit' });
+/** The command line of a PostgreSQL program: it refuses to run as root, so as root the cluster belongs to the `postgres` user. */
+export function pgCommand(program: string, args: string[]): [string, string[]] {
+  return isRoot() ? ['runuser', ['-u', 'postgres', '--', program, ...args]] : [program, args];
 }
 
-function ownForPostgres(dir: string): void {
+function runPg(program: string, args: string[]): void {
+  execFileSync(...pgCommand(program, args), { stdio: 'inherit' });
+}
+
+export function ownForPostgres(dir: string): void {
   mkdirSync(dir, { recursive: true });
   if (isRoot()) {
     const uid = Number(execFileSync('id', ['-u', 'postgres']).toString().trim());
@@ -56,7 +59,7 @@ function ownForPostgres(dir: string): void {
   }
 }
 
-function ensureBinaries(): string {
+export function ensureBinaries(): string {
   let bin = binDir();
   if (!bin) {
     ensureDebianPackages({ postgresql: '/usr/lib/postgresql/__probe__' }, 'the local database');
@@ -67,9 +70,16 @@ function ensureBinaries(): string {
 }
 
 function isRunning(bin: string, dataDir: string): boolean {
-  const args = ['status', '-D', dataDir];
-  const result = isRoot() ? spawnSync('runuser', ['-u', 'postgres', '--', path.join(bin, 'pg_ctl'), ...args]) : spawnSync(path.join(bin, 'pg_ctl'), args);
-  return result.status === 0;
+  return spawnSync(...pgCommand(path.join(bin, 'pg_ctl'), ['status', '-D', dataDir])).status === 0;
+}
+
+/** initdb's arguments: trust on loopback only, as the cluster listens on 127.0.0.1 and a private socket directory. */
+export const initdbArgs = (dataDir: string): string[] => ['-D', dataDir, '-U', LOCAL_PG_USER, '-A', 'trust', '-E', 'UTF8', '--locale=C.UTF-8'];
+
+/** pg_ctl's arguments to start a cluster on 127.0.0.1:`port` with `settings` (name=value), waiting until it accepts connections. */
+export function pgCtlStartArgs({ dataDir, socketDir, logFile }: ClusterPaths, port: number, settings: string[]): string[] {
+  const options = [`-c listen_addresses=127.0.0.1 -p ${port} -c unix_socket_directories=${socketDir}`, ...settings.map((s) => `-c ${s}`)].join(' ');
+  return ['start', '-w', '-t', '60', '-D', dataDir, '-l', logFile, '-o', options];
 }
 
 export type LocalCluster = { adminUrl: (database: string) => string; stop(): void; startedHere: boolean };
@@ -77,12 +87,12 @@ export type LocalCluster = { adminUrl: (database: string) => string; stop(): voi
 /** Creates the cluster if absent and starts it if stopped. `stop()` only stops what this call started. */
 export function ensureLocalCluster(): LocalCluster {
   const bin = ensureBinaries();
-  const { dataDir, socketDir, logFile } = clusterPaths();
+  const paths = clusterPaths();
+  const { dataDir, socketDir, logFile } = paths;
   if (!existsSync(path.join(dataDir, 'PG_VERSION'))) {
     console.log(`Creating a PostgreSQL cluster in ${dataDir}…`);
     ownForPostgres(dataDir);
-    // Trust on loopback only: the cluster listens on 127.0.0.1 and a private socket directory.
-    runPg(path.join(bin, 'initdb'), ['-D', dataDir, '-U', LOCAL_PG_USER, '-A', 'trust', '-E', 'UTF8', '--locale=C.UTF-8']);
+    runPg(path.join(bin, 'initdb'), initdbArgs(dataDir));
   }
   ownForPostgres(socketDir);
   if (isRoot()) {
@@ -91,8 +101,7 @@ export function ensureLocalCluster(): LocalCluster {
   }
   let startedHere = false;
   if (!isRunning(bin, dataDir)) {
-    const options = `-c listen_addresses=127.0.0.1 -p ${LOCAL_PG_PORT} -c unix_socket_directories=${socketDir} -c synchronous_commit=off -c max_connections=200`;
-    runPg(path.join(bin, 'pg_ctl'), ['start', '-w', '-t', '60', '-D', dataDir, '-l', logFile, '-o', options]);
+    runPg(path.join(bin, 'pg_ctl'), pgCtlStartArgs(paths, LOCAL_PG_PORT, ['synchronous_commit=off', 'max_connections=200']));
     startedHere = true;
   }
   return {

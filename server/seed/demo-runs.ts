@@ -23,7 +23,7 @@ export async function seedDemoRuns(sequelize: Sequelize): Promise<void> {
   const areas = await StudyArea.findAll({ where: { teamId: team.id }, attributes: ['id'] });
   const scenarios = await Scenario.findAll({ where: { studyAreaId: areas.map((a) => a.id) }, order: [['id', 'ASC']] });
   // Demo people are told by notice; the demo sends no e-mail.
-  const ctx = { config: loadConfig(), logger: pino({ level: 'silent' }), mailer: { send: async (): Promise<boolean> => false } };
+  const ctx = { config: loadConfig(), logger: pino({ level: 'silent' }), mailer: { send: async (): Promise<void> => {} } };
   for (const scenario of scenarios) {
     if (await Run.findOne({ where: { scenarioId: scenario.id, status: 'succeeded' } })) continue;
     const run = await startRun({ sequelize }, noQueue, editor, scenario.id, { steps: DEMO_STEPS, replicates: DEMO_REPLICATES, seed: `demo: ${scenario.name}` });

@@ -1,25 +1,29 @@
 // Accounts: sign-up with e-mail verification, password check for sign-in, reset by e-mailed link,
 // and account settings.
-import bcrypt from 'bcryptjs';
 import { Op, type Transaction } from 'sequelize';
 import { AccountToken, Invitation, User } from '../models';
 import type { AppContext } from '../context';
 import { AppError } from '../http/errors';
+import { hashPassword, passwordMatches } from '../auth/passwords';
 import { HOUR_MS, hashToken, newLinkToken } from './tokens';
 import { accountExistsMail, resetMail, verificationMail } from '../mail/templates';
+import type { OutgoingMail } from '../mail/mailer';
 import type { TokenPurpose } from '../models/account-token';
 import type { ChangePasswordBody, ResetBody, SignUpBody, UpdateAccountBody } from '../../shared/schemas';
 
-const BCRYPT_ROUNDS = 10;
 const VERIFY_TTL_MS = 48 * HOUR_MS;
 const RESET_TTL_MS = 1 * HOUR_MS;
 
-export const hashPassword = (password: string): Promise<string> => bcrypt.hash(password, BCRYPT_ROUNDS);
+export { hashPassword };
 
-async function issueToken(userId: number, purpose: TokenPurpose, ttlMs: number): Promise<string> {
-  const { token, tokenHash } = newLinkToken();
-  await AccountToken.create({ userId, purpose, tokenHash, expiresAt: new Date(Date.now() + ttlMs) });
-  return token;
+/** A link token and the mail carrying it, saved in one transaction (the caller's, if given): neither exists without the other. */
+async function mailLinkToken(ctx: AppContext, userId: number, purpose: TokenPurpose, ttlMs: number, mail: (token: string) => OutgoingMail, transaction?: Transaction): Promise<void> {
+  const save = async (t: Transaction): Promise<void> => {
+    const { token, tokenHash } = newLinkToken();
+    await AccountToken.create({ userId, purpose, tokenHash, expiresAt: new Date(Date.now() + ttlMs) }, { transaction: t });
+    await ctx.mailer.send(mail(token), { transaction: t });
+  };
+  await (transaction ? save(transaction) : ctx.sequelize.transaction(save));
 }
 
 /** Marks a token used exactly once (a second use, or an expired token, is refused). */
@@ -56,18 +60,15 @@ export async function signUp(ctx: AppContext, body: SignUpBody): Promise<void> {
   }
   // Arriving from an invitation sent to this address proves the address, so no second mail.
   const verifiedByInvitation = body.invitation ? await hasOpenInvitation(body.email, body.invitation) : false;
-  const user = await User.create({
-    email: body.email,
-    name: body.name,
-    passwordHash: await hashPassword(body.password),
-    emailVerifiedAt: verifiedByInvitation ? new Date() : null,
+  const passwordHash = await hashPassword(body.password);
+  await ctx.sequelize.transaction(async (transaction) => {
+    const user = await User.create({ email: body.email, name: body.name, passwordHash, emailVerifiedAt: verifiedByInvitation ? new Date() : null }, { transaction });
+    if (!verifiedByInvitation) await sendVerification(ctx, user, transaction);
   });
-  if (!verifiedByInvitation) await sendVerification(ctx, user);
 }
 
-export async function sendVerification(ctx: AppContext, user: User): Promise<void> {
-  const token = await issueToken(user.id, 'verify', VERIFY_TTL_MS);
-  await ctx.mailer.send(verificationMail(ctx.config.appUrl, user.email, user.name, token));
+export async function sendVerification(ctx: AppContext, user: User, transaction?: Transaction): Promise<void> {
+  await mailLinkToken(ctx, user.id, 'verify', VERIFY_TTL_MS, (token) => verificationMail(ctx.config.appUrl, user.email, user.name, token), transaction);
 }
 
 export async function resendVerification(ctx: AppContext, email: string): Promise<void> {
@@ -82,12 +83,10 @@ export async function verifyEmail(token: string): Promise<void> {
 
 export type PasswordCheck = { user: User } | { failure: 'wrong' | 'unverified' | 'disabled' };
 
-// One bcrypt comparison whether or not the address exists, so timing does not reveal accounts.
-const DUMMY_HASH = bcrypt.hashSync('not-a-real-password', BCRYPT_ROUNDS);
-
 export async function checkPassword(email: string, password: string): Promise<PasswordCheck> {
   const user = await User.findOne({ where: { email: email.trim().toLowerCase() } });
-  const matches = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH);
+  // One bcrypt comparison whether or not the address exists, so timing does not reveal accounts.
+  const matches = await passwordMatches(password, user?.passwordHash ?? null);
   if (!user || !matches) return { failure: 'wrong' };
   if (user.disabledAt) return { failure: 'disabled' };
   if (!user.emailVerifiedAt) return { failure: 'unverified' };
@@ -97,8 +96,7 @@ export async function checkPassword(email: string, password: string): Promise<Pa
 export async function requestReset(ctx: AppContext, email: string): Promise<void> {
   const user = await User.findOne({ where: { email } });
   if (!user || user.disabledAt) return;
-  const token = await issueToken(user.id, 'reset', RESET_TTL_MS);
-  await ctx.mailer.send(resetMail(ctx.config.appUrl, user.email, user.name, token));
+  await mailLinkToken(ctx, user.id, 'reset', RESET_TTL_MS, (token) => resetMail(ctx.config.appUrl, user.email, user.name, token));
 }
 
 export async function resetPassword(ctx: AppContext, body: ResetBody): Promise<void> {
@@ -125,7 +123,7 @@ export async function updateAccount(user: User, body: UpdateAccountBody): Promis
 }
 
 export async function changePassword(user: User, body: ChangePasswordBody): Promise<void> {
-  if (!(await bcrypt.compare(body.currentPassword, user.passwordHash))) {
+  if (!(await passwordMatches(body.currentPassword, user.passwordHash))) {
     throw new AppError(400, 'wrong_password', 'The current password is not right: type it again, or use "Forgot password".');
   }
   await user.update({ passwordHash: await hashPassword(body.newPassword) });

@@ -1,37 +1,84 @@
-// Reading a finished run: the per-step summary, and the map of any step of the shown replicate
-// (one byte per patch, from the deflated chunk holding that step).
+// Reading a finished run: who may (one light query per request), the per-step summary, and the
+// map of any step of the shown replicate (one byte per patch, from the deflated chunk holding that
+// step), both kept in memory once read.
 import { promisify } from 'node:util';
 import { inflate } from 'node:zlib';
-import { RunFrame, RunResultRow } from '../models';
-import { AppError } from '../http/errors';
-import { FRAME_CHUNK_STEPS, type RunSummary } from '../../shared/schemas';
-import type { RunAccess } from './runs';
+import { QueryTypes, type Sequelize } from 'sequelize';
+import { Run, RunFrame, RunResultRow, type User } from '../models';
+import { AppError, notFound } from '../http/errors';
+import { FRAME_CHUNK_STEPS, type Role, type RunSummary } from '../../shared/schemas';
+import { createResultsCache, type ResultsCache } from './results-cache';
 
 const inflateAsync = promisify(inflate);
 
+/** Memory for the summaries and inflated map chunks of succeeded runs (a 250,000-patch chunk is 4 MB). */
+const RESULTS_CACHE_BYTES = 64 * 2 ** 20;
+
+/**
+ * One cache per database (Sequelize instance): tests and benchmarks open several in one process, and
+ * their run ids overlap. A succeeded run's results never change (only failed or cancelled runs are
+ * retried), and each key carries the attempt besides.
+ */
+const caches = new WeakMap<Sequelize, ResultsCache>();
+function cache(): ResultsCache {
+  const database = Run.sequelize!;
+  let found = caches.get(database);
+  if (!found) caches.set(database, (found = createResultsCache(RESULTS_CACHE_BYTES)));
+  return found;
+}
+
+/** What reading a run's results needs of it; a full RunAccess (downloads) is one too. */
+export type ResultsAccess = { run: Pick<Run, 'id' | 'status' | 'error' | 'attempt' | 'steps' | 'inputsSummary'>; role: Role };
+
+/**
+ * Those fields and the caller's role in the run's team in one plain query, as the map player asks
+ * for every step; 404 unless the run exists and the caller belongs to its team (as runAccess).
+ */
+export async function resultsAccess(runId: number, user: User): Promise<ResultsAccess> {
+  const [found] = await Run.sequelize!.query<ResultsAccess['run'] & { role: Role }>(
+    'SELECT r.id, r.status, r.error, r.attempt, r.steps, r.inputs_summary AS "inputsSummary", m.role FROM runs r JOIN memberships m ON m.team_id = r.team_id AND m.user_id = $2 WHERE r.id = $1',
+    { bind: [runId, user.id], type: QueryTypes.SELECT },
+  );
+  if (!found) throw notFound('Run');
+  const { role, ...run } = found;
+  return { run, role };
+}
+
 /** 409 unless the run has finished with results. */
-export function requireSucceeded(access: RunAccess): void {
+export function requireSucceeded(access: ResultsAccess): void {
   const { run } = access;
   if (run.status === 'succeeded') return;
   const why = run.status === 'failed' ? `it failed: ${run.error ?? 'no reason recorded'}` : run.status === 'cancelled' ? 'it was cancelled' : `it is ${run.status}`;
   throw new AppError(409, 'run_not_finished', `Run ${run.id} has no results: ${why}.`);
 }
 
-export async function runSummary(access: RunAccess): Promise<RunSummary> {
+/** The per-step summary as JSON, serialised once per run. */
+export async function runSummaryJson(access: ResultsAccess): Promise<Buffer> {
   requireSucceeded(access);
-  const row = await RunResultRow.findByPk(access.run.id, { attributes: ['summary'] });
-  if (!row) throw new AppError(409, 'run_not_finished', `Run ${access.run.id} has no results yet.`);
-  return row.summary;
+  const { run } = access;
+  return cache().get(`summary:${run.id}:${run.attempt}`, async () => {
+    const row = await RunResultRow.findByPk(run.id, { attributes: ['summary'] });
+    if (!row) throw new AppError(409, 'run_not_finished', `Run ${run.id} has no results yet.`);
+    return Buffer.from(JSON.stringify(row.summary));
+  });
 }
 
-/** Patch states of the shown replicate at `step`, one byte (state index) per patch. */
-export async function runFrame(access: RunAccess, step: number): Promise<Buffer> {
+export async function runSummary(access: ResultsAccess): Promise<RunSummary> {
+  return JSON.parse((await runSummaryJson(access)).toString()) as RunSummary;
+}
+
+/** Patch states of the shown replicate at `step`, one byte (state index) per patch; a view of the cached chunk, not to be written. */
+export async function runFrame(access: ResultsAccess, step: number): Promise<Buffer> {
   requireSucceeded(access);
   const { run } = access;
   if (step > run.steps) throw new AppError(400, 'invalid_input', `Invalid path: step must be between 0 and ${run.steps}, the run's last step.`);
-  const chunk = await RunFrame.findOne({ where: { runId: run.id, chunkIndex: Math.floor(step / FRAME_CHUNK_STEPS) } });
-  if (!chunk) throw new AppError(409, 'run_not_finished', `Run ${run.id} has no stored map for step ${step}.`);
+  const chunkIndex = Math.floor(step / FRAME_CHUNK_STEPS);
+  const chunk = await cache().get(`frames:${run.id}:${run.attempt}:${chunkIndex}`, async () => {
+    const row = await RunFrame.findOne({ where: { runId: run.id, chunkIndex } });
+    if (!row) throw new AppError(409, 'run_not_finished', `Run ${run.id} has no stored map for step ${step}.`);
+    return inflateAsync(row.bytes);
+  });
   const patches = run.inputsSummary.patchCount;
   const at = (step % FRAME_CHUNK_STEPS) * patches;
-  return (await inflateAsync(chunk.bytes)).subarray(at, at + patches);
+  return chunk.subarray(at, at + patches);
 }

@@ -96,7 +96,8 @@ export async function setStartCoverFromMap(access: StudyAreaAccess, file: Upload
   const fallback = fields.fallback ? codes.indexOf(fields.fallback) : null;
   if (fallback === -1) throw new AppError(400, 'invalid_mapping', `The fallback "${fields.fallback}" is not a cover state of this study area (${codes.join(', ')}).`);
   const { features } = await readPolygonFeatures(new Uint8Array(upload.buffer), upload.originalname);
-  if (!features.some((f) => fields.property in f.properties)) {
+  // Own attributes only: `in` would also find Object.prototype's ("constructor", "toString").
+  if (!features.some((f) => Object.hasOwn(f.properties, fields.property))) {
     throw new AppError(400, 'invalid_mapping', `No polygon in the map has the attribute "${fields.property}"; choose one of the attributes the map has.`);
   }
   const { grid, boundary } = await loadStoredGrid(access.studyArea.id);

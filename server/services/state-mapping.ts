@@ -14,6 +14,11 @@ export function parseStateMapping(json: string, states: readonly CoverState[]): 
   } catch {
     throw new AppError(400, 'invalid_mapping', 'mapping must be JSON: an object from the file\'s labels to state codes, e.g. {"sage": "SS", "not visited": null}.');
   }
+  // JSON.parse keeps a "__proto__" key as an own property, but zod leaves it out of a record
+  // unchecked (a prototype-pollution guard): refuse it rather than drop that label silently.
+  if (typeof raw === 'object' && raw !== null && Object.hasOwn(raw, '__proto__')) {
+    throw new AppError(400, 'invalid_mapping', 'The mapping has the label "__proto__", which cannot be used as a label: rename it in the file and in the mapping.');
+  }
   const mapping = parseInput(stateMappingSchema, raw, 'body');
   const codes = states.map((s) => s.code);
   const unknown = Object.entries(mapping).filter(([, code]) => code !== null && !codes.includes(code));

@@ -16,7 +16,8 @@ export type DatedMap = { file: UploadedFile; date: string; role: 'earlier' | 'la
 
 async function mapFeatures(map: DatedMap, property: string, labels: LabelMap): Promise<PolygonFeature[]> {
   const { features } = await readPolygonFeatures(new Uint8Array(map.file.buffer), map.file.originalname);
-  if (!features.some((f) => property in f.properties)) {
+  // Own attributes only: `in` would also find Object.prototype's ("constructor", "toString").
+  if (!features.some((f) => Object.hasOwn(f.properties, property))) {
     throw new AppError(400, 'invalid_mapping', `No polygon on the ${map.role} map (${map.file.originalname}) has the attribute "${property}"; choose an attribute both maps have.`);
   }
   const firstSeen = new Map<string, string>();

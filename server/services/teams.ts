@@ -92,17 +92,17 @@ export async function invite(ctx: AppContext, access: TeamAccess, inviter: User,
   });
   if (existing) throw new AppError(409, 'already_member', `${body.email} is already a member of this team.`);
   const { token, tokenHash } = newLinkToken();
-  const invitation = await Invitation.create({
-    teamId: access.team.id,
-    email: body.email,
-    role: body.role,
-    tokenHash,
-    invitedBy: inviter.id,
-    expiresAt: new Date(Date.now() + INVITATION_TTL_MS),
+  // The invitation, its audit entry and the mail carrying its link are saved together or not at all.
+  const invitation = await ctx.sequelize.transaction(async (transaction) => {
+    const created = await Invitation.create(
+      { teamId: access.team.id, email: body.email, role: body.role, tokenHash, invitedBy: inviter.id, expiresAt: new Date(Date.now() + INVITATION_TTL_MS) },
+      { transaction },
+    );
+    await recordAudit(access.team.id, inviter, 'invitation.sent', `invited ${body.email} as ${body.role}`, transaction);
+    await ctx.mailer.send(invitationMail(ctx.config.appUrl, body.email, access.team.name, inviter.name, body.role, token), { transaction });
+    return created;
   });
   invitation.inviter = inviter;
-  await recordAudit(access.team.id, inviter, 'invitation.sent', `invited ${body.email} as ${body.role}`);
-  await ctx.mailer.send(invitationMail(ctx.config.appUrl, body.email, access.team.name, inviter.name, body.role, token));
   return invitationView(invitation);
 }
 

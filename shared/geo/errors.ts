@@ -19,7 +19,8 @@ export type BoundaryErrorCode =
   | 'too-many-vertices'
   | 'cell-size-out-of-range'
   | 'min-fraction-out-of-range'
-  | 'too-many-patches';
+  | 'too-many-patches'
+  | 'no-patches';
 
 export class BoundaryInputError extends Error {
   readonly code: BoundaryErrorCode;

@@ -119,6 +119,11 @@ export function buildPatchGrid(shape: Shape, options: GridOptions): PatchGrid {
   const spec = gridSpecFor(p, cellSize);
   const covered = cover(p, spec, minFraction, maxPatches);
   if (covered === null) throw tooMany(p, cellSize, minFraction, maxPatches);
+  // A grid without patches would make a study area with nothing to simulate.
+  if (covered.cells.length === 0) {
+    const kept = minFraction > 0 ? `keeps ${Number((minFraction * 100).toPrecision(6))} % of its area inside the boundary` : 'overlaps the boundary';
+    throw new BoundaryInputError('no-patches', `no ${cellSize} m cell ${kept}, so the grid has no patches; use a smaller cell size${minFraction > 0 ? ' or a lower minimum fraction' : ''}`);
+  }
   const areas = new Float32Array(covered.fractions.length);
   let totalAreaM2 = 0;
   for (let i = 0; i < areas.length; i++) {

@@ -5,8 +5,8 @@ export type CsvRecord = { line: number; cells: string[] };
 
 /**
  * Parses RFC 4180 CSV: comma-separated, double-quoted fields may hold commas, quotes ("") and
- * line breaks; CRLF or LF; a leading byte-order mark is dropped; cells are trimmed; blank lines
- * are skipped.
+ * line breaks; CRLF or LF; a leading byte-order mark is dropped; unquoted text is trimmed (a quoted
+ * field keeps its spaces, as csvField writes them); blank lines are skipped.
  */
 export function parseCsv(text: string): CsvRecord[] {
   const source = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
@@ -14,13 +14,19 @@ export function parseCsv(text: string): CsvRecord[] {
   let cells: string[] = [];
   let cell = '';
   let quoted = false;
+  /** Length of the cell's quoted part once its quote has closed; -1 for an unquoted cell. */
+  let quotedLength = -1;
   let line = 1;
   let recordLine = 1;
+  const endCell = (): void => {
+    cells.push(quotedLength < 0 ? cell.trim() : cell.slice(0, quotedLength) + cell.slice(quotedLength).trimEnd());
+    cell = '';
+    quotedLength = -1;
+  };
   const endRecord = (): void => {
-    cells.push(cell.trim());
+    endCell();
     if (cells.length > 1 || cells[0] !== '') records.push({ line: recordLine, cells });
     cells = [];
-    cell = '';
   };
   for (let i = 0; i < source.length; i++) {
     const ch = source[i];
@@ -30,6 +36,7 @@ export function parseCsv(text: string): CsvRecord[] {
         i++;
       } else if (ch === '"') {
         quoted = false;
+        quotedLength = cell.length;
       } else {
         if (ch === '\n') line++;
         cell += ch;
@@ -38,8 +45,7 @@ export function parseCsv(text: string): CsvRecord[] {
       quoted = true;
       cell = '';
     } else if (ch === ',') {
-      cells.push(cell.trim());
-      cell = '';
+      endCell();
     } else if (ch === '\n' || ch === '\r') {
       if (ch === '\r' && source[i + 1] === '\n') i++;
       endRecord();

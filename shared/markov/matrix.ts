@@ -82,6 +82,8 @@ export function createMatrix(
     const sum = fsum(row);
     if (options.normalise) {
       if (sum === 0) throw new MarkovInputError(`${locate.row(i)} is all zeros; it cannot be normalised`);
+      // Weights near 1.8e308 (Number.MAX_VALUE) overflow the sum, and dividing by it gives NaN or 0.
+      if (!Number.isFinite(sum)) throw new MarkovInputError(`${locate.row(i)} adds up past the largest number a computer can hold; scale its weights down before normalising`);
       return row.map((value) => value / sum);
     }
     if (Math.abs(sum - 1) > ROW_SUM_TOLERANCE) {
@@ -95,9 +97,9 @@ export function createMatrix(
   return { states: names, rows: out };
 }
 
-/** The transpose of a square array: columns become rows. */
+/** The transpose of a square array: columns become rows (none for none, e.g. a header-only file). */
 export function transpose(rows: readonly (readonly number[])[]): number[][] {
-  return rows[0].map((_, j) => rows.map((row) => row[j]));
+  return (rows[0] ?? []).map((_, j) => rows.map((row) => row[j]));
 }
 
 /** Row vector times matrix: (x P)_j = Σ_i x_i p_ij, compensated. */

@@ -68,7 +68,14 @@ export type PlotSurveyFields = z.infer<typeof plotSurveyFieldsSchema>;
 export const mapPairInspectionSchema = z.object({ earlier: coverMapInspectionSchema, later: coverMapInspectionSchema });
 export type MapPairInspection = z.infer<typeof mapPairInspectionSchema>;
 
-const date = (what: string) => z.string({ error: `${what} is required (YYYY-MM-DD)` }).regex(/^\d{4}-\d{2}-\d{2}$/, `${what} must look like 2019-06-30`);
+/** True for a day that exists: Date.parse refuses month 13 but rolls 2019-02-30 over to 2 March. */
+const isCalendarDay = (s: string): boolean => !Number.isNaN(Date.parse(s)) && new Date(s).toISOString().startsWith(s);
+
+const date = (what: string) =>
+  z
+    .string({ error: `${what} is required (YYYY-MM-DD)` })
+    .regex(/^\d{4}-\d{2}-\d{2}$/, `${what} must look like 2019-06-30`)
+    .refine(isCalendarDay, `${what} is not a day of the calendar (check the month and the day)`);
 
 /** Multipart text fields of POST /study-areas/:studyAreaId/surveys/map-pair (files `earlier` and `later`). */
 export const mapPairFieldsSchema = z

@@ -11,7 +11,7 @@ const teamName = z
   .min(1, 'name must not be empty')
   .max(120, 'name must have at most 120 characters');
 
-export const idParamSchema = z.coerce.number({ error: 'id must be a number' }).int().positive();
+export const idParamSchema = z.coerce.number({ error: 'id must be a number' }).int('id must be a whole number').positive('id must be 1 or more');
 
 /** POST /teams and PATCH /teams/:teamId */
 export const teamBodySchema = z.object({ name: teamName });

@@ -11,7 +11,6 @@ import { recordReliability } from '../support/reliability-log';
 import { startTestApp, type TestApp } from '../support/test-app';
 import { createApp } from '../../server/app';
 import { createLogger } from '../../server/logger';
-import { createMailer } from '../../server/mail/mailer';
 import { Run, RunFrame, RunInput, RunResultRow } from '../../server/models';
 import { float32s, kernelSpecOf, uint8s } from '../../server/services/runs-inputs';
 import { simulateRun } from '../../shared/markov';
@@ -160,7 +159,7 @@ test('when a worker is killed with SIGKILL while it holds a shard, then the shar
 
 test('when the web side that started a run shuts down mid-run, then the workers finish it', async () => {
   const logger = createLogger(t.config);
-  const web = createApp({ config: t.config, sequelize: t.sequelize, mailer: createMailer(t.config.smtpUrl, t.config.mailFrom, logger), logger });
+  const web = createApp({ config: t.config, sequelize: t.sequelize, mailer: t.mailer, logger });
   const other = client(web.app);
   const [person] = await query<{ email: string }>(`SELECT u.email FROM users u JOIN memberships m ON m.user_id = u.id WHERE m.role = 'editor'`);
   await other.signIn(person.email, PASSWORD);

@@ -7,7 +7,6 @@ import { client, type Client } from '../support/client';
 import { makeTeam, makeUser, PASSWORD } from '../support/people';
 import { startTestApp, type TestApp } from '../support/test-app';
 import { createLogger } from '../../server/logger';
-import { createMailer } from '../../server/mail/mailer';
 import { Run, RunInput, RunResultRow, type Team, type User } from '../../server/models';
 import { startRunWorker, type RunWorker } from '../../server/jobs/worker';
 import { loadJobSettings } from '../../server/jobs/settings';
@@ -42,7 +41,7 @@ const MATRIX = [
 
 function startWorker(concurrency: number): Promise<RunWorker> {
   const logger = createLogger(t.config);
-  return startRunWorker({ config: t.config, logger, mailer: createMailer(t.config.smtpUrl, t.config.mailFrom, logger) }, { ...loadJobSettings(), concurrency, pollSeconds: 0.5 });
+  return startRunWorker({ config: t.config, logger, mailer: t.mailer }, { ...loadJobSettings(), concurrency, pollSeconds: 0.5 });
 }
 
 async function waitForRun(id: number, until: (run: RunView) => boolean): Promise<RunView> {

@@ -13,7 +13,8 @@ export type Client = {
   signIn(email: string, password: string): Promise<request.Response>;
 };
 
-export function client(app: Express): Client {
+/** `app` is the Express app itself, or the base URL of a server running elsewhere. */
+export function client(app: Express | string): Client {
   const agent = request.agent(app);
   let token = '';
   const refreshCsrf = async (): Promise<string> => {

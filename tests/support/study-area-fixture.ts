@@ -6,6 +6,7 @@ import type request from 'supertest';
 import { client, type Client } from './client';
 import { makeTeam, makeUser, PASSWORD } from './people';
 import { startTestApp, type TestApp } from './test-app';
+import type { Team, User } from '../../server/models';
 import { DEFAULT_STATE_COLOURS } from '../../shared/schemas';
 
 export type Who = 'owner' | 'editor' | 'viewer' | 'outsider' | 'anonymous';
@@ -13,6 +14,8 @@ export const EVERYONE: readonly Who[] = ['owner', 'editor', 'viewer', 'outsider'
 
 export type Fixture = {
   t: TestApp;
+  team: Team;
+  people: Record<Exclude<Who, 'anonymous'>, User>;
   as: Record<Who, Client>;
   /** A new study area of the team with these state names (codes S1, S2, …); returns its id. */
   makeArea(stateNames: string[], cellSize?: number): Promise<number>;
@@ -21,6 +24,15 @@ export type Fixture = {
 };
 
 export const cinderFlatBoundary = readFileSync(path.resolve(__dirname, '../../server/seed/boundaries/cinder-flat.geojson'));
+
+/** Multipart POST with files and text fields, as this client. */
+export async function uploadAs(c: Client, url: string, files: Record<string, [Buffer, string]>, fields: Record<string, string> = {}): Promise<request.Response> {
+  const token = await c.refreshCsrf();
+  let req = c.agent.post(url).set('x-csrf-token', token);
+  for (const [field, [bytes, name]] of Object.entries(files)) req = req.attach(field, bytes, name);
+  for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
+  return req;
+}
 
 export async function startFixture(): Promise<Fixture> {
   const t = await startTestApp();
@@ -31,18 +43,12 @@ export async function startFixture(): Promise<Fixture> {
     as[role as Who] = client(t.app);
     await as[role as Who].signIn(user.email, PASSWORD);
   }
-  const upload: Fixture['upload'] = async (who, url, files, fields = {}) => {
-    const token = await as[who].refreshCsrf();
-    let req = as[who].agent.post(url).set('x-csrf-token', token);
-    for (const [field, [bytes, name]] of Object.entries(files)) req = req.attach(field, bytes, name);
-    for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
-    return req;
-  };
+  const upload: Fixture['upload'] = (who, url, files, fields) => uploadAs(as[who], url, files, fields);
   const makeArea: Fixture['makeArea'] = async (stateNames, cellSize = 500) => {
     const states = stateNames.map((name, i) => ({ code: `S${i + 1}`, name, colour: DEFAULT_STATE_COLOURS[i % DEFAULT_STATE_COLOURS.length] }));
     const res = await upload('owner', `/api/v1/teams/${team.id}/study-areas`, { file: [cinderFlatBoundary, 'cinder-flat.geojson'] }, { name: stateNames.join('/'), cellSize: String(cellSize), states: JSON.stringify(states) });
     if (res.status !== 201) throw new Error(`study area not created: ${JSON.stringify(res.body)}`);
     return res.body.studyArea.id;
   };
-  return { t, as, makeArea, upload };
+  return { t, team, people, as, makeArea, upload };
 }

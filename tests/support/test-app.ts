@@ -7,15 +7,22 @@ import { createApp } from '../../server/app';
 import { loadConfig, type Config } from '../../server/config';
 import { connectDatabase } from '../../server/db';
 import { createLogger } from '../../server/logger';
-import { createMailer } from '../../server/mail/mailer';
+import { createMailer, type Mailer } from '../../server/mail/mailer';
 import { readOutbox, startMailCatcher } from '../../server/mail/catcher';
+import { workMail } from '../../server/mail/sender';
+import { startBoss } from '../../server/jobs/boss';
+import { loadJobSettings } from '../../server/jobs/settings';
 import type { CaughtMail } from '../../shared/schemas';
 import { createTestDatabase } from './test-database';
 
 export type TestApp = {
   app: ReturnType<typeof createApp>['app'];
+  /** The API's mounts, for the route table (server/http/route-table.ts). */
+  mounts: ReturnType<typeof createApp>['mounts'];
   config: Config;
   sequelize: Sequelize;
+  /** The app's mailer, for a worker started beside it. */
+  mailer: Mailer;
   /** Waits for a caught message to `to` whose subject contains `subject`, newest first. */
   mailTo(to: string, subject: string): Promise<CaughtMail>;
   close(): Promise<void>;
@@ -31,12 +38,19 @@ export async function startTestApp(overrides: Partial<Config> = {}): Promise<Tes
     smtpUrl: `smtp://127.0.0.1:${catcher.port}`,
     outboxDir,
     appUrl: 'http://patchcast.test',
+    // A mail that failed goes again within seconds, not minutes.
+    mailRetryDelaySeconds: 1,
     ...overrides,
   };
   const logger = createLogger(config);
   const sequelize = connectDatabase(config.databaseUrl);
-  const mailer = createMailer(config.smtpUrl, config.mailFrom, logger);
-  const { app, close } = createApp({ config, sequelize, mailer, logger });
+  const mailer = createMailer(config, sequelize, logger);
+  const { app, mounts, close } = createApp({ config, sequelize, mailer, logger });
+  // The mail side of the embedded worker (server/main.ts), without its run side, which the tests
+  // of runs start themselves.
+  const jobSettings = loadJobSettings();
+  const mailBoss = await startBoss(config.databaseUrl, jobSettings, logger, { supervise: false });
+  await workMail(mailBoss, config, logger, jobSettings.pollSeconds);
 
   async function mailTo(to: string, subject: string): Promise<CaughtMail> {
     for (let attempt = 0; attempt < 50; attempt++) {
@@ -49,11 +63,15 @@ export async function startTestApp(overrides: Partial<Config> = {}): Promise<Tes
 
   return {
     app,
+    mounts,
     config,
     sequelize,
+    mailer,
     mailTo,
     close: async () => {
       await close();
+      await mailBoss.stop({ graceful: false, wait: true });
+      await mailer.stop();
       await sequelize.close();
       await catcher.close();
       await database.drop();
