@@ -4,20 +4,67 @@ import connectPgSimple from 'connect-pg-simple';
 import type { RequestHandler } from 'express';
 import type { Pool } from 'pg';
 import type { Config } from '../config';
+import { ShortLivedCache } from './short-lived-cache';
 
 const FOURTEEN_DAYS_MS = 14 * 24 * 3_600_000;
 const TOUCH_INTERVAL_MS = 60_000;
+/** How long a session read from PostgreSQL is reused for the same cookie (see SessionStore). */
+const READ_CACHE_MS = 2_000;
 
 const PgStore = connectPgSimple(session);
 
+/** Every store of this process (weakly: tests make many), so ending sessions reaches their cached copies. */
+const stores = new Set<WeakRef<SessionStore>>();
+
 /**
- * `rolling` has express-session extend every unchanged session through the store's touch, which
- * connect-pg-simple answers with an UPDATE, and the answer waits for it: a write per read. Once per
- * session a minute in this process keeps the stored expiry within two minutes of the cookie's 14 days.
+ * Reads: every signed-in request reads its session; a session read in the last READ_CACHE_MS is
+ * reused (as JSON, so each request still gets its own object). This process forgets its copy
+ * whenever it saves or destroys that session, and all copies when it ends someone's sessions, so
+ * sign-out and sign-out-everywhere take effect at once here; a change made by another process
+ * shows within READ_CACHE_MS.
+ * Touches: `rolling` has express-session extend every unchanged session through the store's
+ * touch, which connect-pg-simple answers with an UPDATE, and the answer waits for it: a write per
+ * read. Once per session a minute in this process keeps the stored expiry within two minutes of
+ * the cookie's 14 days.
  */
-class ThrottledTouchStore extends PgStore {
+class SessionStore extends PgStore {
+  readonly #read = new ShortLivedCache<string, string>(READ_CACHE_MS);
   #window = 0;
   #touched = new Set<string>();
+
+  constructor(options: ConstructorParameters<typeof PgStore>[0]) {
+    super(options);
+    stores.add(new WeakRef(this));
+  }
+
+  override get(sid: string, callback: (err: unknown, session?: SessionData | null) => void): void {
+    const cached = this.#read.get(sid);
+    if (cached !== undefined) {
+      callback(null, JSON.parse(cached) as SessionData);
+      return;
+    }
+    const epoch = this.#read.epoch;
+    super.get(sid, (err: unknown, session?: SessionData | null) => {
+      if (!err && session) this.#read.fill(sid, JSON.stringify(session), epoch);
+      callback(err, session);
+    });
+  }
+
+  override set(sid: string, session: SessionData, callback?: (err?: unknown) => void): void {
+    this.#read.forget(sid);
+    super.set(sid, session, (err?: unknown) => {
+      this.#read.forget(sid);
+      callback?.(err);
+    });
+  }
+
+  override destroy(sid: string, callback?: (err?: unknown) => void): void {
+    this.#read.forget(sid);
+    super.destroy(sid, (err?: unknown) => {
+      this.#read.forget(sid);
+      callback?.(err);
+    });
+  }
 
   override touch(sid: string, sess: SessionData, callback?: () => void): void {
     const window = Math.floor(Date.now() / TOUCH_INTERVAL_MS);
@@ -32,13 +79,27 @@ class ThrottledTouchStore extends PgStore {
     this.#touched.add(sid);
     super.touch(sid, sess, callback);
   }
+
+  forgetAll(): void {
+    this.#read.forgetAll();
+  }
+
+}
+
+/** After sessions were deleted in the database (sign-out everywhere): drop every cached copy. */
+export function forgetCachedSessions(): void {
+  for (const ref of stores) {
+    const store = ref.deref();
+    if (store) store.forgetAll();
+    else stores.delete(ref);
+  }
 }
 
 export function sessionMiddleware(config: Config, pool: Pool): RequestHandler {
   return session({
     name: 'patchcast.sid',
     secret: config.sessionSecret,
-    store: new ThrottledTouchStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
+    store: new SessionStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
     resave: false,
     saveUninitialized: false,
     rolling: true,

@@ -5,6 +5,7 @@ import { AccountToken, Invitation, User } from '../models';
 import type { AppContext } from '../context';
 import { AppError } from '../http/errors';
 import { hashPassword, passwordMatches } from '../auth/passwords';
+import { forgetCachedSessions } from '../auth/session';
 import { HOUR_MS, hashToken, newLinkToken } from './tokens';
 import { accountExistsMail, resetMail, verificationMail } from '../mail/templates';
 import type { OutgoingMail } from '../mail/mailer';
@@ -116,6 +117,9 @@ export async function endSessionsOf(ctx: AppContext, userId: number, transaction
     replacements: { userId: String(userId) },
     transaction,
   });
+  // Now, and again once the delete is visible to other connections' reads.
+  forgetCachedSessions();
+  transaction?.afterCommit(forgetCachedSessions);
 }
 
 export async function updateAccount(user: User, body: UpdateAccountBody): Promise<User> {

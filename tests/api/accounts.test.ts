@@ -91,14 +91,18 @@ describe('forgot and reset password', () => {
     expect(unknown.body).toEqual(known.body);
   });
 
-  test('when the e-mailed reset link is used, then the new password works, the old does not, and a second use fails', async () => {
+  test('when the e-mailed reset link is used, then the new password works, the old does not, a second use fails, and other sessions end at once', async () => {
     const c = client(t.app);
+    const elsewhere = client(t.app);
+    expect((await elsewhere.signIn(person.email, person.password)).status).toBe(200);
+    expect((await elsewhere.get('/api/v1/auth/me')).status).toBe(200);
     const mail = await t.mailTo(person.email, 'Reset your Patchcast password');
     const token = tokenFrom(mail.links.find((l) => l.includes('/reset?token='))!);
     expect((await c.post('/api/v1/auth/reset', { token, password: 'second-password-2' })).status).toBe(200);
     expect((await c.post('/api/v1/auth/reset', { token, password: 'third-password-3' })).status).toBe(400);
     expect((await c.signIn(person.email, 'first-password-1')).status).toBe(401);
     expect((await c.signIn(person.email, 'second-password-2')).status).toBe(200);
+    expect((await elsewhere.get('/api/v1/auth/me')).status).toBe(401);
   });
 });
 
@@ -110,9 +114,12 @@ describe('account settings', () => {
     await c.post('/api/v1/auth/verify', { token: tokenFrom((await t.mailTo(email, 'Confirm')).links[0]) });
     await c.signIn(email, 'settings-pass-1');
 
+    expect((await c.get('/api/v1/auth/me')).body.user.name).toBe('Old Name');
     const changed = await c.patch('/api/v1/account', { name: 'New Name', areaUnit: 'acres' });
     expect(changed.status).toBe(200);
     expect(changed.body.user).toMatchObject({ name: 'New Name', areaUnit: 'acres' });
+    // The very next request sees the change (nothing stale is kept of the signed-in person).
+    expect((await c.get('/api/v1/auth/me')).body.user).toMatchObject({ name: 'New Name', areaUnit: 'acres' });
 
     const wrong = await c.post('/api/v1/account/password', { currentPassword: 'not-it-at-all', newPassword: 'settings-pass-2' });
     expect(wrong.status).toBe(400);

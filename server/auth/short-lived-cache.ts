@@ -1,0 +1,41 @@
+// A small map for lookups that every signed-in request repeats (its session, its user). Entries
+// live `ttlMs` at most: this process forgets an entry itself when it changes what it holds, and
+// the TTL bounds how long a change made elsewhere (another process, psql) can go unseen.
+export class ShortLivedCache<K, V> {
+  readonly #entries = new Map<K, { value: V; until: number }>();
+  #epoch = 0;
+
+  constructor(
+    private readonly ttlMs: number,
+    private readonly maxEntries = 10_000,
+  ) {}
+
+  get(key: K): V | undefined {
+    const hit = this.#entries.get(key);
+    if (hit && hit.until >= Date.now()) return hit.value;
+    if (hit) this.#entries.delete(key);
+    return undefined;
+  }
+
+  /** Take before a lookup starts; `fill` with it afterwards. */
+  get epoch(): number {
+    return this.#epoch;
+  }
+
+  /** Keeps a looked-up value unless something was forgotten since the lookup began (it may be stale). */
+  fill(key: K, value: V, epoch: number): void {
+    if (epoch !== this.#epoch) return;
+    if (this.#entries.size >= this.maxEntries) this.#entries.clear();
+    this.#entries.set(key, { value, until: Date.now() + this.ttlMs });
+  }
+
+  forget(key: K): void {
+    this.#epoch += 1;
+    this.#entries.delete(key);
+  }
+
+  forgetAll(): void {
+    this.#epoch += 1;
+    this.#entries.clear();
+  }
+}
