@@ -4,12 +4,14 @@ import connectPgSimple from 'connect-pg-simple';
 import type { RequestHandler } from 'express';
 import type { Pool } from 'pg';
 import type { Config } from '../config';
-import { ShortLivedCache } from './short-lived-cache';
+import { ShortLivedCache } from '../services/short-lived-cache';
 
 const FOURTEEN_DAYS_MS = 14 * 24 * 3_600_000;
 const TOUCH_INTERVAL_MS = 60_000;
 /** How long a session read from PostgreSQL is reused for the same cookie (see SessionStore). */
 const READ_CACHE_MS = 2_000;
+/** Sessions whose last touch is remembered; past that the record starts again (a few extra writes). */
+const MAX_TOUCHES_KEPT = 100_000;
 
 const PgStore = connectPgSimple(session);
 
@@ -24,13 +26,12 @@ const stores = new Set<WeakRef<SessionStore>>();
  * shows within READ_CACHE_MS.
  * Touches: `rolling` has express-session extend every unchanged session through the store's
  * touch, which connect-pg-simple answers with an UPDATE, and the answer waits for it: a write per
- * read. Once per session a minute in this process keeps the stored expiry within two minutes of
- * the cookie's 14 days.
+ * read. Once per session a minute in this process keeps the stored expiry within a minute of the
+ * cookie's 14 days.
  */
 class SessionStore extends PgStore {
   readonly #read = new ShortLivedCache<string, string>(READ_CACHE_MS);
-  #window = 0;
-  #touched = new Set<string>();
+  readonly #touchedAt = new Map<string, number>();
 
   constructor(options: ConstructorParameters<typeof PgStore>[0]) {
     super(options);
@@ -67,16 +68,14 @@ class SessionStore extends PgStore {
   }
 
   override touch(sid: string, sess: SessionData, callback?: () => void): void {
-    const window = Math.floor(Date.now() / TOUCH_INTERVAL_MS);
-    if (window !== this.#window) {
-      this.#window = window;
-      this.#touched = new Set();
-    }
-    if (this.#touched.has(sid)) {
+    const now = Date.now();
+    // Per session, so that sessions begun together are not all written again in one burst.
+    if (now - (this.#touchedAt.get(sid) ?? -Infinity) < TOUCH_INTERVAL_MS) {
       callback?.();
       return;
     }
-    this.#touched.add(sid);
+    if (this.#touchedAt.size >= MAX_TOUCHES_KEPT) this.#touchedAt.clear();
+    this.#touchedAt.set(sid, now);
     super.touch(sid, sess, callback);
   }
 

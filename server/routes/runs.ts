@@ -1,10 +1,10 @@
-import { Router, type Request } from 'express';
+import { Router, type Request, type Response } from 'express';
 import type { AppContext } from '../context';
 import { parseInput } from '../http/validate';
 import { currentUser } from '../http/require-user';
 import type { RunQueue } from '../jobs/run-queue';
 import * as runs from '../services/runs';
-import { resultsAccess, runFrame, runSummaryJson, type ResultsAccess } from '../services/runs-results';
+import { resultsAccess, runFrame, runSummaryGzip, runSummaryJson, type ResultsAccess } from '../services/runs-results';
 import { idParamSchema, startRunBodySchema, stepParamSchema, type Role } from '../../shared/schemas';
 
 const EDITORS: readonly Role[] = ['owner', 'editor'];
@@ -50,16 +50,26 @@ export function runRoutes(ctx: AppContext, queue: RunQueue): Router {
     res.json({ run: await runs.retryRun(ctx, queue, await runOf(req, EDITORS)) });
   });
 
-  // A succeeded run's results never change, so the browser may keep them (RFC 8246, immutable).
+  // A succeeded run's results never change, so the browser may keep them (RFC 8246, immutable),
+  // and the run, attempt and step name them: that is their ETag, instead of hashing every body.
+  const finished = (res: Response, tag: string): Response => res.set({ 'cache-control': FINISHED_RESULTS_CACHING, etag: `"${tag}"` });
+
   router.get('/:runId/summary', async (req, res) => {
-    const json = await runSummaryJson(await resultsOf(req));
-    res.type('json').set('cache-control', FINISHED_RESULTS_CACHING).send(json);
+    const access = await resultsOf(req);
+    const tag = `summary-${access.run.id}-${access.run.attempt}`;
+    // The body first: a run without results answers 409, which must not carry these headers.
+    const gzipped = req.acceptsEncodings('gzip') === 'gzip';
+    const body = gzipped ? await runSummaryGzip(access) : await runSummaryJson(access);
+    res.vary('accept-encoding').type('json');
+    if (gzipped) finished(res, `${tag}-gzip`).set('content-encoding', 'gzip').send(body);
+    else finished(res, tag).send(body);
   });
 
   router.get('/:runId/frames/:step', async (req, res) => {
     const access = await resultsOf(req);
-    const bytes = await runFrame(access, parseInput(stepParamSchema, req.params.step, 'path'));
-    res.type('application/octet-stream').set('cache-control', FINISHED_RESULTS_CACHING).send(bytes);
+    const step = parseInput(stepParamSchema, req.params.step, 'path');
+    const bytes = await runFrame(access, step);
+    finished(res, `frame-${access.run.id}-${access.run.attempt}-${step}`).type('application/octet-stream').send(bytes);
   });
 
   return router;

@@ -2,14 +2,16 @@
 // map of any step of the shown replicate (one byte per patch, from the deflated chunk holding that
 // step), both kept in memory once read.
 import { promisify } from 'node:util';
-import { inflate } from 'node:zlib';
+import { gzip, inflate } from 'node:zlib';
 import { QueryTypes, type Sequelize } from 'sequelize';
-import { Run, RunFrame, RunResultRow, type User } from '../models';
+import { Membership, Run, RunFrame, RunResultRow, StudyArea, Team, type User } from '../models';
+import { lookupCache } from './lookup-cache';
 import { AppError, notFound } from '../http/errors';
 import { FRAME_CHUNK_STEPS, type Role, type RunSummary } from '../../shared/schemas';
 import { createResultsCache, type ResultsCache } from './results-cache';
 
 const inflateAsync = promisify(inflate);
+const gzipAsync = promisify(gzip);
 
 /** Memory for the summaries and inflated map chunks of succeeded runs (a 250,000-patch chunk is 4 MB). */
 const RESULTS_CACHE_BYTES = 64 * 2 ** 20;
@@ -30,18 +32,34 @@ function cache(): ResultsCache {
 /** What reading a run's results needs of it; a full RunAccess (downloads) is one too. */
 export type ResultsAccess = { run: Pick<Run, 'id' | 'status' | 'error' | 'attempt' | 'steps' | 'inputsSummary'>; role: Role };
 
-/**
- * Those fields and the caller's role in the run's team in one plain query, as the map player asks
- * for every step; 404 unless the run exists and the caller belongs to its team (as runAccess).
- */
-export async function resultsAccess(runId: number, user: User): Promise<ResultsAccess> {
+/** Who may read which succeeded run, reused while nothing about teams, members, study areas or runs changes here. */
+const successAccess = lookupCache<string, ResultsAccess>('forget-results-access', 2_000, [Membership, Run, StudyArea, Team]);
+
+async function readResultsAccess(runId: number, user: User): Promise<ResultsAccess | null> {
   const [found] = await Run.sequelize!.query<ResultsAccess['run'] & { role: Role }>(
     'SELECT r.id, r.status, r.error, r.attempt, r.steps, r.inputs_summary AS "inputsSummary", m.role FROM runs r JOIN memberships m ON m.team_id = r.team_id AND m.user_id = $2 WHERE r.id = $1',
     { bind: [runId, user.id], type: QueryTypes.SELECT },
   );
-  if (!found) throw notFound('Run');
+  if (!found) return null;
   const { role, ...run } = found;
   return { run, role };
+}
+
+/**
+ * Those fields and the caller's role in the run's team in one plain query, as the map player asks
+ * for every step; 404 unless the run exists and the caller belongs to its team (as runAccess).
+ * Only a succeeded run's answer is reused: its status no longer changes (the job workers, in other
+ * processes, change the status of runs still going).
+ */
+export async function resultsAccess(runId: number, user: User): Promise<ResultsAccess> {
+  let read = null as ResultsAccess | null;
+  const cached = await successAccess.get(`${runId}:${user.id}`, async () => {
+    read = await readResultsAccess(runId, user);
+    return read?.run.status === 'succeeded' ? read : null;
+  });
+  const found = cached ?? read;
+  if (!found) throw notFound('Run');
+  return found;
 }
 
 /** 409 unless the run has finished with results. */
@@ -61,6 +79,13 @@ export async function runSummaryJson(access: ResultsAccess): Promise<Buffer> {
     if (!row) throw new AppError(409, 'run_not_finished', `Run ${run.id} has no results yet.`);
     return Buffer.from(JSON.stringify(row.summary));
   });
+}
+
+/** The same JSON gzipped once, for clients that accept it (every browser): about a fifth of the bytes. */
+export async function runSummaryGzip(access: ResultsAccess): Promise<Buffer> {
+  const { run } = access;
+  const json = await runSummaryJson(access);
+  return cache().get(`summary-gzip:${run.id}:${run.attempt}`, () => gzipAsync(json));
 }
 
 export async function runSummary(access: ResultsAccess): Promise<RunSummary> {

@@ -281,6 +281,35 @@ describe('roles and lifecycle while no worker runs', () => {
       expect(late.body.error.message).toMatch(/between 0 and 20/);
     });
 
+    test('when a browser offers gzip, then the summary comes gzipped and unpacks to the same JSON as the plain answer', async () => {
+      const url = `/api/v1/runs/${ownerRun.id}/summary`;
+      const raw = (accept: string) => as.viewer.agent.get(url).set('accept-encoding', accept).buffer(true).parse((response, done) => {
+        const chunks: Buffer[] = [];
+        response.on('data', (c: Buffer) => chunks.push(c));
+        response.on('end', () => done(null, Buffer.concat(chunks)));
+      });
+      const plain = await raw('identity');
+      const packed = await raw('gzip, deflate, br');
+      expect(plain.headers['content-encoding']).toBeUndefined();
+      expect(packed.headers['content-encoding']).toBe('gzip');
+      expect(packed.headers.vary).toMatch(/accept-encoding/i);
+      expect(packed.headers.etag).not.toBe(plain.headers.etag);
+      // superagent unpacks gzip (RFC 1952) with Node's zlib before the body reaches the test.
+      expect((packed.body as Buffer).equals(plain.body as Buffer)).toBe(true);
+      expect(Number(packed.headers['content-length'])).toBeLessThan(Number(plain.headers['content-length']) / 2);
+    });
+
+    test('when a member who has just read a run is removed from the team, then their next read is refused', async () => {
+      const leaver = await makeUser('Leaver');
+      await team.sequelize.models.Membership.create({ teamId: team.id, userId: leaver.id, role: 'viewer' });
+      const c = client(t.app);
+      await c.signIn(leaver.email, PASSWORD);
+      expect((await c.get(`/api/v1/runs/${ownerRun.id}/frames/0`)).status).toBe(200);
+      expect((await as.owner.delete(`/api/v1/teams/${team.id}/members/${leaver.id}`)).status).toBe(204);
+      expect((await c.get(`/api/v1/runs/${ownerRun.id}/frames/0`)).status).toBe(404);
+      expect((await c.get(`/api/v1/runs/${ownerRun.id}/summary`)).status).toBe(404);
+    });
+
     test('when a run is split into 3 shards per replicate over 3 worker threads, then its results are the same bytes as the 1-shard run and simulateRun', async () => {
       await worker!.stop();
       process.env.PATCHCAST_SHARD_PATCH_STEPS = '100000';

@@ -16,7 +16,8 @@ const STEP_STRIDE = 7;
 
 /** Reader `connection`'s loop: per run, its summary and FRAMES_PER_RUN consecutive maps from a step of its own. */
 function readerRequests(runs: FinishedRun[], cookie: string, connection: number): autocannon.Request[] {
-  const headers = { cookie };
+  // What a browser sends with every request (Chromium, Firefox and Safari all offer gzip).
+  const headers = { cookie, 'accept-encoding': 'gzip, deflate, br' };
   return runs.flatMap((run) => {
     const first = (connection * STEP_STRIDE) % (run.steps + 1);
     return [
@@ -26,11 +27,17 @@ function readerRequests(runs: FinishedRun[], cookie: string, connection: number)
   });
 }
 
+/** The readers alone against a server from startLoadServer. */
+export function readersAgainst(server: LoadServer, options: LoadOptions): Promise<CannonFigures> {
+  const { url, runs, readerCookies } = server;
+  return cannon(url, options, (i) => readerRequests(runs, readerCookies[i % readerCookies.length], i));
+}
+
 /** The readers and the attack against a server from startLoadServer (with at least two spare accounts). */
 export async function loadAgainst(server: LoadServer, options: LoadOptions): Promise<LoadResult> {
-  const { url, runs, readerCookies, spareEmails } = server;
+  const { url, spareEmails } = server;
   let readersDone = false;
-  const readers = cannon(url, options, (i) => readerRequests(runs, readerCookies[i % readerCookies.length], i)).finally(() => {
+  const readers = readersAgainst(server, options).finally(() => {
     readersDone = true;
   });
   const started = performance.now();

@@ -1,5 +1,5 @@
 // A small map for lookups that every signed-in request repeats (its session, its user). Entries
-// live `ttlMs` at most: this process forgets an entry itself when it changes what it holds, and
+// live about `ttlMs` (at most 1.25 × ttlMs): this process forgets an entry itself when it changes what it holds, and
 // the TTL bounds how long a change made elsewhere (another process, psql) can go unseen.
 export class ShortLivedCache<K, V> {
   readonly #entries = new Map<K, { value: V; until: number }>();
@@ -26,7 +26,9 @@ export class ShortLivedCache<K, V> {
   fill(key: K, value: V, epoch: number): void {
     if (epoch !== this.#epoch) return;
     if (this.#entries.size >= this.maxEntries) this.#entries.clear();
-    this.#entries.set(key, { value, until: Date.now() + this.ttlMs });
+    // Lifetimes spread over ±25 %: entries filled together (a burst of sign-ins) then expire apart,
+    // not all in one burst of lookups.
+    this.#entries.set(key, { value, until: Date.now() + this.ttlMs * (0.75 + Math.random() / 2) });
   }
 
   forget(key: K): void {
