@@ -1,4 +1,5 @@
 /** Design tokens from the product brief (§7). Every style in the app reads from here. */
+import type { TextStyle } from 'react-native';
 
 export const colors = {
   sand: '#F4EFE6',
@@ -50,6 +51,18 @@ export const typeScale = {
   small: { fontSize: 13, lineHeight: 18 },
   tiny: { fontSize: 11, lineHeight: 14 },
 } as const;
+
+/** The look of every numeric entry (shares, step ranges, matrix cells): right-aligned mono digits in a framed box. */
+export const numberInput: TextStyle = {
+  borderWidth: 1,
+  borderColor: colors.line,
+  borderRadius: radius.sm,
+  backgroundColor: colors.white,
+  textAlign: 'right',
+  fontFamily: fonts.mono,
+  fontVariant: ['tabular-nums'],
+  color: colors.basalt,
+};
 
 /** Window-width breakpoints; `wide` switches the bottom tabs to a left rail. */
 export const breakpoints = { wide: 1024 } as const;

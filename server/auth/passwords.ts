@@ -1,7 +1,8 @@
 // bcrypt on a worker thread. bcryptjs is plain JavaScript: a comparison at 10 rounds holds the
 // thread it runs on for about 100 ms (its async API yields only every 100 ms), so on the event
 // loop every sign-in attempt, a guesser's included, would stall every other request.
-import { Worker } from 'node:worker_threads';
+import type { Worker } from 'node:worker_threads';
+import { startThread } from '../engine/start-thread';
 import type { PasswordReply, PasswordRequest, PasswordTask } from './passwords-thread';
 
 type Pending = { resolve: (value: string | boolean) => void; reject: (err: Error) => void };
@@ -11,9 +12,8 @@ const pending = new Map<number, Pending>();
 let nextId = 0;
 let worker: Worker | null = null;
 
-/** From TypeScript sources (tsx, jest) the thread first registers tsx's require hook. */
-function startThread(): Worker {
-  const started = threadFile.endsWith('.ts') ? new Worker(`require('tsx/cjs'); require(${JSON.stringify(threadFile)});`, { eval: true, execArgv: [] }) : new Worker(threadFile);
+function startPasswordThread(): Worker {
+  const started = startThread(threadFile);
   started.on('message', ({ id, value, error }: PasswordReply) => {
     const task = pending.get(id);
     pending.delete(id);
@@ -34,7 +34,7 @@ function startThread(): Worker {
 }
 
 function run(request: PasswordRequest): Promise<string | boolean> {
-  worker ??= startThread();
+  worker ??= startPasswordThread();
   worker.ref();
   const id = nextId++;
   return new Promise((resolve, reject) => {

@@ -1,6 +1,7 @@
 // Splits a run over worker_threads (node-only). Shards are block-aligned and merged in block order,
 // so the result is byte-identical to simulateRun with any number of workers (shared/markov/run.ts).
-import { Worker } from 'node:worker_threads';
+import type { Worker } from 'node:worker_threads';
+import { startThread } from './start-thread';
 import type { ShardResult } from '../../shared/markov/kernel';
 import { mergeShards, runTasks, type RunResult, type RunSpec } from '../../shared/markov/run';
 
@@ -12,12 +13,7 @@ export type ShardPool = { run: () => Promise<RunResult>; close: () => Promise<vo
 
 const workerFile = require.resolve('./shardWorker');
 
-/** A worker on shardWorker; from TypeScript sources (tsx, jest) it first registers tsx's require hook. */
-function startWorker(workerData: ShardWorkerData): Worker {
-  if (!workerFile.endsWith('.ts')) return new Worker(workerFile, { workerData });
-  const source = `require('tsx/cjs'); require(${JSON.stringify(workerFile)});`;
-  return new Worker(source, { eval: true, workerData, execArgv: [] });
-}
+const startWorker = (workerData: ShardWorkerData): Worker => startThread(workerFile, { workerData });
 
 /** Sends one task to a worker and waits for its result (or its failure). */
 function runTask(worker: Worker, task: ShardTaskMessage): Promise<ShardResult> {

@@ -1,6 +1,7 @@
 // A small pool of worker threads for shard computation, so that a process's event loop (the web
 // server's, with the embedded worker) stays free while shards run.
-import { Worker } from 'node:worker_threads';
+import type { Worker } from 'node:worker_threads';
+import { startThread } from '../engine/start-thread';
 import { computeShard, type ShardInput, type ShardOutput } from './shard-compute';
 import type { ShardReply } from './shard-thread';
 
@@ -15,11 +16,6 @@ export class ShardComputeError extends Error {
 
 const threadFile = require.resolve('./shard-thread');
 
-/** From TypeScript sources (tsx, jest) the thread first registers tsx's require hook. */
-function startThread(): Worker {
-  if (!threadFile.endsWith('.ts')) return new Worker(threadFile);
-  return new Worker(`require('tsx/cjs'); require(${JSON.stringify(threadFile)});`, { eval: true, execArgv: [] });
-}
 
 type Slot = { worker: Worker; current: Pending | null };
 type Pending = { input: ShardInput; resolve: (output: ShardOutput) => void; reject: (err: Error) => void };
@@ -38,7 +34,7 @@ export function createShardPool(size: number): ShardPool {
   }
 
   function addSlot(): Slot {
-    const slot: Slot = { worker: startThread(), current: null };
+    const slot: Slot = { worker: startThread(threadFile), current: null };
     slot.worker.on('message', (reply: ShardReply) => {
       const pending = slot.current;
       slot.current = null;

@@ -7,7 +7,7 @@ import { Card } from '@/components/Card';
 import { Heading } from '@/components/Heading';
 import { Text } from '@/components/Text';
 import { TextLink } from '@/components/TextLink';
-import { colors, fonts, radius, space, typeScale } from '@/components/theme';
+import { numberInput, space, typeScale } from '@/components/theme';
 import type { CoverState } from '@/shared/schemas';
 
 import { MatrixEditor } from '../matrix-editor/MatrixEditor';
@@ -97,18 +97,5 @@ const styles = StyleSheet.create({
   range: { flexDirection: 'row', alignItems: 'center', flexWrap: 'wrap', gap: space.sm },
   survey: { flexDirection: 'row', alignItems: 'center', flexWrap: 'wrap', gap: space.sm },
   issues: { gap: space.xxs },
-  input: {
-    width: 72,
-    minHeight: 44,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.sm,
-    backgroundColor: colors.white,
-    paddingHorizontal: space.sm,
-    textAlign: 'right',
-    fontFamily: fonts.mono,
-    fontVariant: ['tabular-nums'],
-    color: colors.basalt,
-    ...typeScale.body,
-  },
+  input: { ...numberInput, width: 72, minHeight: 44, paddingHorizontal: space.sm, ...typeScale.body },
 });

@@ -4,7 +4,7 @@ import { StyleSheet, TextInput, View } from 'react-native';
 import { SegmentedControl } from '@/components/SegmentedControl';
 import { Section } from '@/components/Section';
 import { Text } from '@/components/Text';
-import { colors, fonts, radius, space, typeScale } from '@/components/theme';
+import { numberInput, space, typeScale } from '@/components/theme';
 import type { CoverState } from '@/shared/schemas';
 import { formatPercent } from '@/features/studyAreas/formatArea';
 
@@ -89,18 +89,5 @@ export function StartCoverFields({ states, form, dispatch, readOnly, studyAreaSh
 const styles = StyleSheet.create({
   shares: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
   share: { gap: space.xs },
-  input: {
-    width: 96,
-    minHeight: 44,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.sm,
-    backgroundColor: colors.white,
-    paddingHorizontal: space.sm,
-    textAlign: 'right',
-    fontFamily: fonts.mono,
-    fontVariant: ['tabular-nums'],
-    color: colors.basalt,
-    ...typeScale.small,
-  },
+  input: { ...numberInput, width: 96, minHeight: 44, paddingHorizontal: space.sm, ...typeScale.small },
 });

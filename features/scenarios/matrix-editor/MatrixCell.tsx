@@ -1,7 +1,7 @@
 import { useCallback, useRef, useState, type ReactElement } from 'react';
 import { StyleSheet, TextInput } from 'react-native';
 
-import { colors, fonts, radius, typeScale } from '@/components/theme';
+import { colors, numberInput, typeScale } from '@/components/theme';
 
 import { useBlockPaste } from './useBlockPaste';
 import { shortForm } from './cellDisplay';
@@ -47,20 +47,7 @@ export function MatrixCell({ label, text, issue, readOnly, onChange, onPasteBloc
 }
 
 const styles = StyleSheet.create({
-  cell: {
-    width: CELL_WIDTH,
-    height: CELL_HEIGHT,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.sm,
-    backgroundColor: colors.white,
-    paddingHorizontal: 6,
-    textAlign: 'right',
-    color: colors.basalt,
-    fontFamily: fonts.mono,
-    fontVariant: ['tabular-nums'],
-    ...typeScale.small,
-  },
+  cell: { ...numberInput, width: CELL_WIDTH, height: CELL_HEIGHT, paddingHorizontal: 6, ...typeScale.small },
   bad: { borderColor: colors.rust, borderWidth: 2, borderStyle: 'dashed', backgroundColor: colors.rustTint },
   readOnly: { backgroundColor: colors.surface },
 });
