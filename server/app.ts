@@ -8,6 +8,7 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import type { AppContext } from './context';
 import { createPool } from './db';
+import { httpLogSerializers } from './logger';
 import { sessionMiddleware } from './auth/session';
 import { configurePassport } from './auth/passport';
 import { csrf } from './auth/csrf';
@@ -94,7 +95,15 @@ export function createApp(ctx: AppContext): App {
     }),
   );
   // Successful requests log at debug, so the console shows problems, not traffic.
-  app.use(pinoHttp({ logger, autoLogging: config.env !== 'test', customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'debug') }));
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: config.env !== 'test',
+      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'debug'),
+      wrapSerializers: false,
+      serializers: httpLogSerializers,
+    }),
+  );
 
   const api = express.Router();
   const mount = ({ path, guard, router }: ApiMount): void => {
@@ -104,7 +113,8 @@ export function createApp(ctx: AppContext): App {
   api.use(jsonOrMultipartBodies);
   mounts.beforeSession.forEach(mount);
   api.use(sessionMiddleware(config, pool));
-  api.use(auth.initialize());
+  // compat only serves strategies written for passport 0.4, which this app has none of.
+  api.use(auth.initialize({ compat: false }));
   api.use(auth.session());
   api.use(csrf.csrfSynchronisedProtection);
   mounts.afterSession.forEach(mount);

@@ -4,12 +4,10 @@ import connectPgSimple from 'connect-pg-simple';
 import type { RequestHandler } from 'express';
 import type { Pool } from 'pg';
 import type { Config } from '../config';
-import { ShortLivedCache } from '../services/short-lived-cache';
+import { ShortLivedCache, SIGNED_IN_LOOKUP_TTL_MS } from '../services/short-lived-cache';
 
 const FOURTEEN_DAYS_MS = 14 * 24 * 3_600_000;
 const TOUCH_INTERVAL_MS = 60_000;
-/** How long a session read from PostgreSQL is reused for the same cookie (see SessionStore). */
-const READ_CACHE_MS = 2_000;
 /** Sessions whose last touch is remembered; past that the record starts again (a few extra writes). */
 const MAX_TOUCHES_KEPT = 100_000;
 
@@ -19,18 +17,18 @@ const PgStore = connectPgSimple(session);
 const stores = new Set<WeakRef<SessionStore>>();
 
 /**
- * Reads: every signed-in request reads its session; a session read in the last READ_CACHE_MS is
+ * Reads: every signed-in request reads its session; a session read in the last SIGNED_IN_LOOKUP_TTL_MS is
  * reused (as JSON, so each request still gets its own object). This process forgets its copy
  * whenever it saves or destroys that session, and all copies when it ends someone's sessions, so
  * sign-out and sign-out-everywhere take effect at once here; a change made by another process
- * shows within READ_CACHE_MS.
+ * shows within SIGNED_IN_LOOKUP_TTL_MS.
  * Touches: `rolling` has express-session extend every unchanged session through the store's
  * touch, which connect-pg-simple answers with an UPDATE, and the answer waits for it: a write per
  * read. Once per session a minute in this process keeps the stored expiry within a minute of the
  * cookie's 14 days.
  */
 class SessionStore extends PgStore {
-  readonly #read = new ShortLivedCache<string, string>(READ_CACHE_MS);
+  readonly #read = new ShortLivedCache<string, string>(SIGNED_IN_LOOKUP_TTL_MS);
   readonly #touchedAt = new Map<string, number>();
 
   constructor(options: ConstructorParameters<typeof PgStore>[0]) {

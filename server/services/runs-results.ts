@@ -6,6 +6,7 @@ import { gzip, inflate } from 'node:zlib';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { Membership, Run, RunFrame, RunResultRow, StudyArea, Team, type User } from '../models';
 import { lookupCache } from './lookup-cache';
+import { SIGNED_IN_LOOKUP_TTL_MS } from './short-lived-cache';
 import { AppError, notFound } from '../http/errors';
 import { FRAME_CHUNK_STEPS, type Role, type RunSummary } from '../../shared/schemas';
 import { createResultsCache, type ResultsCache } from './results-cache';
@@ -33,7 +34,7 @@ function cache(): ResultsCache {
 export type ResultsAccess = { run: Pick<Run, 'id' | 'status' | 'error' | 'attempt' | 'steps' | 'inputsSummary'>; role: Role };
 
 /** Who may read which succeeded run, reused while nothing about teams, members, study areas or runs changes here. */
-const successAccess = lookupCache<string, ResultsAccess>('forget-results-access', 2_000, [Membership, Run, StudyArea, Team]);
+const successAccess = lookupCache<string, ResultsAccess>('forget-results-access', SIGNED_IN_LOOKUP_TTL_MS, [Membership, Run, StudyArea, Team]);
 
 async function readResultsAccess(runId: number, user: User): Promise<ResultsAccess | null> {
   const [found] = await Run.sequelize!.query<ResultsAccess['run'] & { role: Role }>(

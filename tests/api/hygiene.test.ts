@@ -7,10 +7,20 @@ import { startTestApp, type TestApp } from '../support/test-app';
 
 describe('in production', () => {
   let t: TestApp;
+  const logLines: string[] = [];
   beforeAll(async () => {
-    t = await startTestApp({ env: 'production', outboxEnabled: false, sessionSecret: 'a-long-production-like-secret-for-tests' });
+    t = await startTestApp({ env: 'production', outboxEnabled: false, sessionSecret: 'a-long-production-like-secret-for-tests' }, { write: (line: string) => logLines.push(line) });
   });
   afterAll(() => t.close());
+
+  test('when a request is refused, then its log line names the method, path and status, and none of its headers', async () => {
+    const res = await request(t.app).get('/api/v1/teams').set('cookie', 'patchcast.sid=s%3Asecret-session-id').set('x-csrf-token', 'secret-csrf-token');
+    expect(res.status).toBe(401);
+    const line = logLines.map((l) => JSON.parse(l)).find((l) => l.req?.url === '/api/v1/teams');
+    expect(line).toMatchObject({ req: { method: 'GET', url: '/api/v1/teams' }, res: { statusCode: 401 } });
+    expect(line.req.headers).toBeUndefined();
+    expect(logLines.join('')).not.toMatch(/secret-session-id|secret-csrf-token/);
+  });
 
   test('when a session starts behind the TLS-terminating proxy, then its cookie is HttpOnly, SameSite=Lax and Secure', async () => {
     // Production runs behind a proxy on loopback that terminates TLS and says so in X-Forwarded-Proto.

@@ -2,6 +2,7 @@
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import type { DestinationStream } from 'pino';
 import type { Sequelize } from 'sequelize';
 import { createApp } from '../../server/app';
 import { loadConfig, type Config } from '../../server/config';
@@ -28,7 +29,8 @@ export type TestApp = {
   close(): Promise<void>;
 };
 
-export async function startTestApp(overrides: Partial<Config> = {}): Promise<TestApp> {
+/** `logTo` receives the app's log lines instead of standard output. */
+export async function startTestApp(overrides: Partial<Config> = {}, logTo?: DestinationStream): Promise<TestApp> {
   const database = await createTestDatabase();
   const outboxDir = mkdtempSync(path.join(tmpdir(), 'patchcast-outbox-'));
   const catcher = await startMailCatcher(outboxDir, 0);
@@ -42,7 +44,7 @@ export async function startTestApp(overrides: Partial<Config> = {}): Promise<Tes
     mailRetryDelaySeconds: 1,
     ...overrides,
   };
-  const logger = createLogger(config);
+  const logger = createLogger(config, logTo);
   const sequelize = connectDatabase(config.databaseUrl);
   const mailer = createMailer(config, sequelize, logger);
   const { app, mounts, close } = createApp({ config, sequelize, mailer, logger });
