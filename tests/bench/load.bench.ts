@@ -5,7 +5,7 @@
 // with 0 errors. Uses its own database on the local cluster.
 import { loadavg } from 'node:os';
 import { cannon, type CannonFigures } from '../reliability/cannon';
-import { loadAgainst, readersAgainst } from '../reliability/load';
+import { healthAgainst, loadAgainst, readersAgainst } from '../reliability/load';
 import { startLoadServer } from '../reliability/load-server';
 
 const OPTIONS = { durationSeconds: 30, connections: 100 };
@@ -22,7 +22,7 @@ export async function bench(): Promise<void> {
   const server = await startLoadServer(OPTIONS.connections);
   try {
     line(`load on loopback: ${OPTIONS.connections} connections × ${OPTIONS.durationSeconds} s, ${server.runs.length} finished runs (load average before: ${load()})`);
-    const health = await cannon(server.url, OPTIONS, () => [{ method: 'GET', path: '/api/v1/health' }]);
+    const health = await healthAgainst(server, OPTIONS);
     line(`  health route (SELECT 1, no session)            ${figures(health)}  (load ${load()})`);
     const me = await cannon(server.url, OPTIONS, (i) => [{ method: 'GET', path: '/api/v1/auth/me', headers: { cookie: server.readerCookies[i] } }]);
     line(`  /auth/me (session and user, no run)            ${figures(me)}  (load ${load()})`);

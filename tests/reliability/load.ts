@@ -27,6 +27,11 @@ function readerRequests(runs: FinishedRun[], cookie: string, connection: number)
   });
 }
 
+/** The baseline: the same connections and duration on the health route (one SELECT 1, no session). */
+export function healthAgainst(server: LoadServer, options: LoadOptions): Promise<CannonFigures> {
+  return cannon(server.url, options, () => [{ method: 'GET', path: '/api/v1/health' }]);
+}
+
 /** The readers alone against a server from startLoadServer. */
 export function readersAgainst(server: LoadServer, options: LoadOptions): Promise<CannonFigures> {
   const { url, runs, readerCookies } = server;
