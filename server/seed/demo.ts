@@ -1,5 +1,5 @@
 // The invented demo: the "Juniper Wash Restoration Cooperative", its owner, editor and viewer,
-// and two invented study areas. Idempotent: running it again changes nothing that exists.
+// their activity log, and two invented study areas. Idempotent: running it again changes nothing that exists.
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import type { Sequelize } from 'sequelize';
@@ -10,6 +10,7 @@ import { setStartCoverByProportions } from '../services/start-cover';
 import { teamAccess } from '../services/teams';
 import { seedDemoScenarios } from './demo-scenarios';
 import { seedDemoRuns } from './demo-runs';
+import { seedDemoActivity } from './demo-activity';
 import { DEFAULT_STATE_COLOURS, type CoverState, type Role } from '../../shared/schemas';
 
 export const DEMO_PASSWORD = 'juniper-wash-demo';
@@ -73,6 +74,7 @@ export async function seedDemo(sequelize: Sequelize): Promise<void> {
       defaults: { teamId: team.id, userId: user.id, role: person.role, notifyRuns: person.role !== 'viewer' },
     });
   }
+  await seedDemoActivity(team, users);
   for (const area of demoAreas) await seedStudyArea(sequelize, team, users[0], area);
   await seedDemoScenarios(sequelize);
   await seedDemoRuns(sequelize);

@@ -160,7 +160,7 @@ export async function deleteStudyArea(ctx: Pick<AppContext, 'sequelize'>, access
   if (access.role !== 'owner') throw forbidden('Only owners can delete a study area.');
   await ctx.sequelize.transaction(async (transaction) => {
     await access.studyArea.destroy({ transaction });
-    await recordAudit(access.studyArea.teamId, actor, 'study_area.deleted', `deleted the study area "${access.studyArea.name}"`, transaction);
+    await recordAudit(access.studyArea.teamId, actor, { action: 'study_area.deleted', name: access.studyArea.name }, { transaction });
   });
 }
 

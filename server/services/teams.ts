@@ -81,7 +81,7 @@ export async function teamDetail(access: TeamAccess): Promise<TeamDetail> {
 export async function renameTeam(access: TeamAccess, actor: User, name: string): Promise<TeamSummary> {
   const before = access.team.name;
   await access.team.update({ name });
-  if (before !== name) await recordAudit(access.team.id, actor, 'team.renamed', `renamed the team from "${before}" to "${name}"`);
+  if (before !== name) await recordAudit(access.team.id, actor, { action: 'team.renamed', from: before, to: name });
   return summary(access.team, access.membership.role);
 }
 
@@ -98,7 +98,7 @@ export async function invite(ctx: AppContext, access: TeamAccess, inviter: User,
       { teamId: access.team.id, email: body.email, role: body.role, tokenHash, invitedBy: inviter.id, expiresAt: new Date(Date.now() + INVITATION_TTL_MS) },
       { transaction },
     );
-    await recordAudit(access.team.id, inviter, 'invitation.sent', `invited ${body.email} as ${body.role}`, transaction);
+    await recordAudit(access.team.id, inviter, { action: 'invitation.sent', email: body.email, role: body.role }, { transaction });
     await ctx.mailer.send(invitationMail(ctx.config.appUrl, body.email, access.team.name, inviter.name, body.role, token), { transaction });
     return created;
   });
@@ -110,7 +110,7 @@ export async function cancelInvitation(access: TeamAccess, actor: User, invitati
   const invitation = await Invitation.findOne({ where: { id: invitationId, teamId: access.team.id, acceptedAt: null } });
   if (!invitation) throw notFound('Invitation');
   await invitation.destroy();
-  await recordAudit(access.team.id, actor, 'invitation.cancelled', `cancelled the invitation of ${invitation.email}`);
+  await recordAudit(access.team.id, actor, { action: 'invitation.cancelled', email: invitation.email });
 }
 
 async function ownerCount(teamId: number, transaction: Transaction): Promise<number> {
@@ -141,7 +141,7 @@ export async function changeMember(ctx: AppContext, access: TeamAccess, actor: U
     const before = member.role;
     await member.update({ ...(body.role ? { role: body.role } : {}), ...(body.notifyRuns === undefined ? {} : { notifyRuns: body.notifyRuns }) }, { transaction });
     if (body.role && body.role !== before) {
-      await recordAudit(access.team.id, actor, 'member.role_changed', `changed ${member.user?.name ?? 'a member'} from ${before} to ${body.role}`, transaction);
+      await recordAudit(access.team.id, actor, { action: 'member.role_changed', member: member.user?.name, from: before, to: body.role }, { transaction });
     }
     return memberView(member);
   });
@@ -155,8 +155,8 @@ export async function removeMember(ctx: AppContext, access: TeamAccess, actor: U
     if (!member) throw notFound('Member');
     if (member.role === 'owner' && (await ownerCount(access.team.id, transaction)) <= 1) throw lastOwner();
     await member.destroy({ transaction });
-    if (isSelf) await recordAudit(access.team.id, actor, 'member.left', `left the team (was ${member.role})`, transaction);
-    else await recordAudit(access.team.id, actor, 'member.removed', `removed ${member.user?.name ?? 'a member'} (${member.role})`, transaction);
+    if (isSelf) await recordAudit(access.team.id, actor, { action: 'member.left', role: member.role }, { transaction });
+    else await recordAudit(access.team.id, actor, { action: 'member.removed', member: member.user?.name, role: member.role }, { transaction });
   });
 }
 
@@ -200,7 +200,7 @@ export async function acceptInvitation(ctx: AppContext, user: User, token: strin
     const existing = await Membership.findOne({ where: { teamId: invitation.teamId, userId: user.id }, transaction });
     const role = existing?.role ?? invitation.role;
     if (!existing) await Membership.create({ teamId: invitation.teamId, userId: user.id, role }, { transaction });
-    await recordAudit(invitation.teamId, user, 'invitation.accepted', `joined as ${role} (invited by ${invitation.inviter?.name ?? 'a former member'})`, transaction);
+    await recordAudit(invitation.teamId, user, { action: 'invitation.accepted', role, inviter: invitation.inviter?.name }, { transaction });
     if (!invitation.team) throw new Error('invitation loaded without its team');
     return summary(invitation.team, role);
   });

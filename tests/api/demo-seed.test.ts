@@ -19,6 +19,17 @@ test('when the demo is seeded twice, then there is one of each account, membersh
   expect(await StudyArea.count()).toBe(2);
 });
 
+test('when the demo owner opens the activity log, then it tells how the team came together, newest first, once however often the demo is seeded', async () => {
+  const c = client(t.app);
+  const owner = demoPeople.find((p) => p.role === 'owner')!;
+  expect((await c.signIn(owner.email, DEMO_PASSWORD)).status).toBe(200);
+  const [team] = (await c.get('/api/v1/teams')).body.teams;
+  const events: { at: string; actor: string; action: string; summary: string }[] = (await c.get(`/api/v1/teams/${team.id}/audit`)).body.events;
+  expect(events.map((e) => e.action)).toEqual(['study_area.deleted', 'invitation.cancelled', 'invitation.sent', 'invitation.accepted', 'invitation.sent', 'member.role_changed', 'invitation.accepted', 'invitation.sent']);
+  expect(events[5]).toMatchObject({ actor: 'Rosa Delgado (demo owner)', summary: 'changed Tomas Whitfield (demo editor) from viewer to editor' });
+  expect(events.map((e) => e.at)).toEqual(events.map((e) => e.at).sort().reverse());
+});
+
 test('when the demo editor signs in, then the team lists Cinder Flat (~3,500 ha) and Heron Bay (~900 ha) with start covers', async () => {
   const c = client(t.app);
   const editor = demoPeople.find((p) => p.role === 'editor')!;
