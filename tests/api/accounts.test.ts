@@ -1,5 +1,6 @@
 // Accounts end to end through the real Express app, PostgreSQL and SMTP catcher.
 import { client } from '../support/client';
+import { storedForms } from '../support/stored-token';
 import { startTestApp, type TestApp } from '../support/test-app';
 
 let t: TestApp;
@@ -91,13 +92,14 @@ describe('forgot and reset password', () => {
     expect(unknown.body).toEqual(known.body);
   });
 
-  test('when the e-mailed reset link is used, then the new password works, the old does not, a second use fails, and other sessions end at once', async () => {
+  test('when the e-mailed reset link is used (its token stored only as a digest), then the new password works, the old does not, a second use fails, and other sessions end at once', async () => {
     const c = client(t.app);
     const elsewhere = client(t.app);
     expect((await elsewhere.signIn(person.email, person.password)).status).toBe(200);
     expect((await elsewhere.get('/api/v1/auth/me')).status).toBe(200);
     const mail = await t.mailTo(person.email, 'Reset your Patchcast password');
     const token = tokenFrom(mail.links.find((l) => l.includes('/reset?token='))!);
+    expect(await storedForms(t.sequelize, 'account_tokens', token)).toEqual({ digestInTable: true, plainAnywhere: [] });
     expect((await c.post('/api/v1/auth/reset', { token, password: 'second-password-2' })).status).toBe(200);
     expect((await c.post('/api/v1/auth/reset', { token, password: 'third-password-3' })).status).toBe(400);
     expect((await c.signIn(person.email, 'first-password-1')).status).toBe(401);

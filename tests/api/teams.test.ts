@@ -1,6 +1,7 @@
 // Teams: creation, invitations accepted by new and existing people, roles and the last-owner rule.
 import { client, type Client } from '../support/client';
 import { makeTeam, makeUser, PASSWORD } from '../support/people';
+import { storedForms } from '../support/stored-token';
 import { startTestApp, type TestApp } from '../support/test-app';
 import { Membership } from '../../server/models';
 
@@ -27,7 +28,7 @@ test('when someone creates a team, then they are its owner and see it in their l
   expect(list.body.teams).toEqual([created.body.team]);
 });
 
-test('when an owner invites a new address, then the invitee signs up from the link and joins with the role', async () => {
+test('when an owner invites a new address, then only the link token\'s digest is stored, and the invitee signs up from the link and joins with the role', async () => {
   const owner = await makeUser('Owner');
   const team = await makeTeam('Wetland Crew', [[owner, 'owner']]);
   const c = await signedIn(owner.email);
@@ -36,6 +37,7 @@ test('when an owner invites a new address, then the invitee signs up from the li
 
   const mail = await t.mailTo('new.member@example.org', 'invited you to Wetland Crew');
   const token = tokenFrom(mail.links.find((l) => l.includes('/invitation?token='))!);
+  expect(await storedForms(t.sequelize, 'invitations', token)).toEqual({ digestInTable: true, plainAnywhere: [] });
 
   const newcomer = client(t.app);
   const preview = await newcomer.get(`/api/v1/invitations/${token}`);
