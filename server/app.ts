@@ -2,19 +2,18 @@
 // HTML for client-side routes.
 import express, { type RequestHandler, type Router } from 'express';
 import helmet from 'helmet';
-import { pinoHttp } from 'pino-http';
 import type { PassportStatic } from 'passport';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import type { AppContext } from './context';
 import { createPool } from './db';
-import { httpLogSerializers } from './logger';
 import { sessionMiddleware } from './auth/session';
 import { configurePassport } from './auth/passport';
 import { csrf } from './auth/csrf';
 import { createRateLimits, type RateLimits } from './auth/rate-limits';
 import { apiNotFound, errorHandler } from './http/errors';
 import { jsonOrMultipartBodies } from './http/content-type';
+import { requestLog } from './http/request-log';
 import { currentUser } from './http/require-user';
 import type { ApiMount, ApiMounts } from './http/route-table';
 import { healthRoutes } from './routes/health';
@@ -94,16 +93,7 @@ export function createApp(ctx: AppContext): App {
       },
     }),
   );
-  // Successful requests log at debug, so the console shows problems, not traffic.
-  app.use(
-    pinoHttp({
-      logger,
-      autoLogging: config.env !== 'test',
-      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'debug'),
-      wrapSerializers: false,
-      serializers: httpLogSerializers,
-    }),
-  );
+  if (config.env !== 'test') app.use(requestLog(logger));
 
   const api = express.Router();
   const mount = ({ path, guard, router }: ApiMount): void => {

@@ -2,11 +2,7 @@ import type { IncomingMessage, ServerResponse } from 'node:http';
 import { pino, type DestinationStream, type Logger } from 'pino';
 import type { Config } from './config';
 
-/**
- * What log lines say about a request and its response. pino-http binds the request to a child
- * logger on every request, logged or not, so this reads only what a line needs; headers stay out
- * of the logs, and with them cookies and CSRF tokens.
- */
+/** What log lines say about a request and its response: no headers, so no cookies or CSRF tokens. */
 export const httpLogSerializers = {
   req: (req: IncomingMessage & { id?: unknown; originalUrl?: string }) => ({ id: req.id, method: req.method, url: req.originalUrl ?? req.url, remoteAddress: req.socket?.remoteAddress }),
   res: (res: ServerResponse) => ({ statusCode: res.statusCode }),

@@ -13,13 +13,16 @@ describe('in production', () => {
   });
   afterAll(() => t.close());
 
-  test('when a request is refused, then its log line names the method, path and status, and none of its headers', async () => {
+  test('when a request is refused, then its log line names the method, path and status, and none of its headers; a success writes none', async () => {
     const res = await request(t.app).get('/api/v1/teams').set('cookie', 'patchcast.sid=s%3Asecret-session-id').set('x-csrf-token', 'secret-csrf-token');
     expect(res.status).toBe(401);
     const line = logLines.map((l) => JSON.parse(l)).find((l) => l.req?.url === '/api/v1/teams');
     expect(line).toMatchObject({ req: { method: 'GET', url: '/api/v1/teams' }, res: { statusCode: 401 } });
     expect(line.req.headers).toBeUndefined();
     expect(logLines.join('')).not.toMatch(/secret-session-id|secret-csrf-token/);
+    // Successes log at debug, below production's info: the console shows problems, not traffic.
+    expect((await request(t.app).get('/api/v1/health')).status).toBe(200);
+    expect(logLines.some((l) => l.includes('/api/v1/health'))).toBe(false);
   });
 
   test('when a session starts behind the TLS-terminating proxy, then its cookie is HttpOnly, SameSite=Lax and Secure', async () => {
