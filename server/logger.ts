@@ -3,8 +3,8 @@ import { pino, type DestinationStream, type Logger } from 'pino';
 import type { Config } from './config';
 
 /** What log lines say about a request and its response: no headers, so no cookies or CSRF tokens. */
-export const httpLogSerializers = {
-  req: (req: IncomingMessage & { id?: unknown; originalUrl?: string }) => ({ id: req.id, method: req.method, url: req.originalUrl ?? req.url, remoteAddress: req.socket?.remoteAddress }),
+const httpLogSerializers = {
+  req: (req: IncomingMessage & { originalUrl?: string }) => ({ method: req.method, url: req.originalUrl ?? req.url, remoteAddress: req.socket?.remoteAddress }),
   res: (res: ServerResponse) => ({ statusCode: res.statusCode }),
   err: pino.stdSerializers.err,
 };

@@ -13,9 +13,9 @@ async function rowsOf(sequelize: Sequelize, table: string): Promise<string[]> {
 
 export async function storedForms(sequelize: Sequelize, table: string, token: string): Promise<{ digestInTable: boolean; plainAnywhere: string[] }> {
   const digest = createHash('sha256').update(token).digest('hex');
-  const plainAnywhere: string[] = [];
-  for (const name of [table, ...MAIL_JOB_TABLES]) {
-    if ((await rowsOf(sequelize, name)).some((row) => row.includes(token))) plainAnywhere.push(name);
-  }
-  return { digestInTable: (await rowsOf(sequelize, table)).some((row) => row.includes(digest)), plainAnywhere };
+  const rows = await Promise.all([table, ...MAIL_JOB_TABLES].map(async (name) => ({ name, rows: await rowsOf(sequelize, name) })));
+  return {
+    digestInTable: rows[0].rows.some((row) => row.includes(digest)),
+    plainAnywhere: rows.filter((t) => t.rows.some((row) => row.includes(token))).map((t) => t.name),
+  };
 }
